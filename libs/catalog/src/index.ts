@@ -1,0 +1,2 @@
+export * from './connections.js';
+export * from './parts/part.schema.js';

@@ -1,0 +1,129 @@
+import { z } from 'zod';
+import { connectionSpecSchema } from '../connections.js';
+
+/** Part kinds kept in a shop's catalogue. DOMAIN.md §2. */
+export const partKindSchema = z.enum(['hose', 'hose-end', 'adapter', 'plug', 'clamp', 'sleeve', 'seal', 'bulkhead']);
+export type PartKind = z.infer<typeof partKindSchema>;
+
+/** Fluids a circuit can carry; hoses list the ones they are rated for. */
+export const fluidSchema = z.enum([
+  'atf',
+  'engine-oil',
+  'gasoline',
+  'e85',
+  'diesel',
+  'power-steering',
+  'coolant',
+  'air',
+]);
+export type Fluid = z.infer<typeof fluidSchema>;
+
+export const hoseLinerSchema = z.enum(['rubber', 'cpe', 'ptfe', 'nylon']);
+export type HoseLiner = z.infer<typeof hoseLinerSchema>;
+
+/** How a supplier sells a part: each, by the foot, or by the pack of N. */
+export const saleUnitSchema = z.discriminatedUnion('type', [
+  z.object({ type: z.literal('each') }),
+  z.object({ type: z.literal('foot') }),
+  z.object({ type: z.literal('pack'), size: z.number().int().positive() }),
+]);
+export type SaleUnit = z.infer<typeof saleUnitSchema>;
+
+const positive = z.number().positive();
+const dash = z.number().int().positive().max(64);
+const angle = z.union([z.literal(0), z.literal(45), z.literal(90), z.literal(120), z.literal(150), z.literal(180)]);
+const odRange = z
+  .object({ minIn: positive, maxIn: positive })
+  .refine((r) => r.minIn <= r.maxIn, { message: 'minIn must not exceed maxIn' });
+
+/** A seal a connection needs (an O-ring by AS568 dash number, or a crush washer by size). */
+export const sealNeedSchema = z.discriminatedUnion('type', [
+  z.object({ type: z.literal('o-ring'), as568: z.string().min(1) }),
+  z.object({ type: z.literal('crush-washer'), size: z.string().min(1) }),
+]);
+export type SealNeed = z.infer<typeof sealNeedSchema>;
+
+export const hoseAttributesSchema = z.object({
+  dash,
+  hoseType: z.string().min(1), // family of hose ends it takes, e.g. "braided-rubber", "ptfe-braided", "push-lock"
+  idIn: positive,
+  odIn: positive,
+  liner: hoseLinerSchema,
+  maxPressurePsi: positive,
+  maxTempF: z.number(),
+  minBendRadiusIn: positive,
+  fluids: z.array(fluidSchema).min(1),
+});
+
+export const hoseEndAttributesSchema = z.object({
+  hoseDash: dash,
+  hoseTypes: z.array(z.string().min(1)).min(1),
+  port: connectionSpecSchema,
+  angle,
+  allowanceIn: z.number().nonnegative(), // seal point to hose cut face
+  boreIn: positive,
+  maxPressurePsi: positive,
+});
+
+export const adapterAttributesSchema = z.object({
+  a: connectionSpecSchema,
+  b: connectionSpecSchema,
+  angle,
+  bodyLengthIn: z.number().nonnegative(),
+  boreIn: positive,
+  features: z.array(z.string().min(1)).default([]),
+  seal: sealNeedSchema.optional(),
+  maxPressurePsi: positive.optional(),
+});
+
+export const plugAttributesSchema = z.object({ connection: connectionSpecSchema, seal: sealNeedSchema.optional() });
+export const clampAttributesSchema = z.object({ fitsOd: odRange });
+export const sleeveAttributesSchema = z.object({ fitsOd: odRange, maxTempF: z.number() });
+export const sealAttributesSchema = z.object({ seal: sealNeedSchema });
+export const bulkheadAttributesSchema = z.object({
+  a: connectionSpecSchema,
+  b: connectionSpecSchema,
+  bodyLengthIn: z.number().nonnegative(),
+  boreIn: positive,
+  maxPressurePsi: positive.optional(),
+});
+
+const common = {
+  id: z.string().min(1),
+  supplierId: z.string().min(1).nullable().default(null),
+  supplierPartNumber: z.string().trim().max(64).default(''),
+  description: z.string().trim().min(1).max(200),
+  priceCents: z.number().int().nonnegative().default(0),
+  saleUnit: saleUnitSchema.default({ type: 'each' }),
+  stockOnHand: z.number().nonnegative().default(0),
+  retired: z.boolean().default(false),
+};
+
+/** A catalogue part: common fields plus kind-specific attributes. */
+export const partSchema = z.discriminatedUnion('kind', [
+  z.object({ ...common, kind: z.literal('hose'), attributes: hoseAttributesSchema }),
+  z.object({ ...common, kind: z.literal('hose-end'), attributes: hoseEndAttributesSchema }),
+  z.object({ ...common, kind: z.literal('adapter'), attributes: adapterAttributesSchema }),
+  z.object({ ...common, kind: z.literal('plug'), attributes: plugAttributesSchema }),
+  z.object({ ...common, kind: z.literal('clamp'), attributes: clampAttributesSchema }),
+  z.object({ ...common, kind: z.literal('sleeve'), attributes: sleeveAttributesSchema }),
+  z.object({ ...common, kind: z.literal('seal'), attributes: sealAttributesSchema }),
+  z.object({ ...common, kind: z.literal('bulkhead'), attributes: bulkheadAttributesSchema }),
+]);
+export type Part = z.infer<typeof partSchema>;
+export type PartOf<K extends PartKind> = Extract<Part, { kind: K }>;
+export type HosePart = PartOf<'hose'>;
+export type HoseEndPart = PartOf<'hose-end'>;
+export type AdapterPart = PartOf<'adapter'>;
+
+/** Attribute schema per kind, for validating a stored row's JSONB on every write. */
+export const partAttributeSchemas = {
+  hose: hoseAttributesSchema,
+  'hose-end': hoseEndAttributesSchema,
+  adapter: adapterAttributesSchema,
+  plug: plugAttributesSchema,
+  clamp: clampAttributesSchema,
+  sleeve: sleeveAttributesSchema,
+  seal: sealAttributesSchema,
+  bulkhead: bulkheadAttributesSchema,
+} as const satisfies Record<PartKind, z.ZodType>;
