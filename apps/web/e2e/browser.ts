@@ -1,0 +1,48 @@
+import { mkdtempSync, mkdirSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+
+export const baseUrl = process.env.BASE_URL ?? 'http://127.0.0.1:3000';
+const artifactsDir = process.env.ARTIFACTS_DIR ?? join(process.cwd(), 'artifacts');
+
+export const demoPassword = 'linesmith-demo';
+export const demoUsers = {
+  admin: 'owner@tidewater.example',
+  fabricator: 'fab@tidewater.example',
+  partsClerk: 'parts@tidewater.example',
+  reviewer: 'lead@tidewater.example',
+} as const;
+
+/** A fresh, isolated Chromium profile per call (the launcher refuses --user-data-dir in args). */
+export async function openBrowser(): Promise<BrowserContext> {
+  return chromium.launchPersistentContext(mkdtempSync(join(tmpdir(), 'linesmith-e2e-')), {
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    headless: true,
+    viewport: { width: 1366, height: 860 },
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
+  });
+}
+
+export async function signIn(page: Page, email: string, password = demoPassword): Promise<void> {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel(/e-?mail/i).fill(email);
+  await page.getByLabel(/password/i).fill(password);
+  await page.getByRole('button', { name: /sign in/i }).click();
+}
+
+export async function screenshot(page: Page, name: string): Promise<string> {
+  const dir = join(artifactsDir, 'screenshots');
+  mkdirSync(dir, { recursive: true });
+  const path = join(dir, `${name}.png`);
+  await page.screenshot({ path, fullPage: true });
+  return path;
+}
