@@ -1,0 +1,48 @@
+import { Module, type DynamicModule } from '@nestjs/common';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { LoggerModule } from 'nestjs-pino';
+import { existsSync } from 'node:fs';
+import { AuthModule } from './auth/auth.module.js';
+import { loggerOptions } from './common/logging/logger-options.js';
+import { AppConfigModule } from './config/app-config.module.js';
+import { AppConfigService } from './config/app-config.service.js';
+import { databaseOptions } from './database/database-options.js';
+import { HealthModule } from './health/health.module.js';
+import { ShopsModule } from './shops/shops.module.js';
+import { UsersModule } from './users/users.module.js';
+
+export interface AppModuleOptions {
+  /** Environment overrides (tests); everything else comes from process.env. */
+  env?: Record<string, string>;
+  /** The built web app to serve for every non-/api path, when the folder exists. */
+  webDistDir?: string;
+}
+
+@Module({})
+export class AppModule {
+  static forRoot(options: AppModuleOptions = {}): DynamicModule {
+    const webDist = options.webDistDir && existsSync(options.webDistDir) ? options.webDistDir : undefined;
+    return {
+      module: AppModule,
+      imports: [
+        AppConfigModule.forRoot(options.env),
+        LoggerModule.forRootAsync({
+          inject: [AppConfigService],
+          useFactory: (config: AppConfigService) => loggerOptions(config.get('LOG_LEVEL')),
+        }),
+        TypeOrmModule.forRootAsync({
+          inject: [AppConfigService],
+          useFactory: (config: AppConfigService) => databaseOptions(config.get('DATABASE_URL')),
+        }),
+        ...(webDist
+          ? [ServeStaticModule.forRoot({ rootPath: webDist, exclude: /^\/api(\/|$)/, serveStaticOptions: { index: false } })]
+          : []),
+        ShopsModule,
+        UsersModule,
+        AuthModule,
+        HealthModule,
+      ],
+    };
+  }
+}

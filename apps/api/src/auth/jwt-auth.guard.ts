@@ -1,0 +1,23 @@
+import { Injectable, type ExecutionContext } from '@nestjs/common';
+import { Reflector } from '@nestjs/core';
+import { AuthGuard } from '@nestjs/passport';
+import { UnauthorizedError } from '../common/errors/app-error.js';
+import { IS_PUBLIC_KEY } from './decorators/public.decorator.js';
+
+/** Global: every route needs a valid access token unless marked `@Public()`. */
+@Injectable()
+export class JwtAuthGuard extends AuthGuard('jwt') {
+  constructor(private readonly reflector: Reflector) {
+    super();
+  }
+
+  override canActivate(context: ExecutionContext) {
+    const isPublic = this.reflector.getAllAndOverride<boolean>(IS_PUBLIC_KEY, [context.getHandler(), context.getClass()]);
+    return isPublic ? true : super.canActivate(context);
+  }
+
+  override handleRequest<TUser>(error: unknown, user: TUser | false): TUser {
+    if (error || !user) throw new UnauthorizedError('Please sign in.');
+    return user;
+  }
+}

@@ -1,0 +1,60 @@
+import { type INestApplication } from '@nestjs/common';
+import { NestFactory } from '@nestjs/core';
+import type { NestExpressApplication } from '@nestjs/platform-express';
+import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import cookieParser from 'cookie-parser';
+import helmet from 'helmet';
+import { Logger } from 'nestjs-pino';
+import { dirname, resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { AppModule } from './app.module.js';
+import { AllExceptionsFilter } from './common/errors/all-exceptions.filter.js';
+import { ZodValidationPipe } from './common/validation/zod-validation.pipe.js';
+
+export const API_PREFIX = 'api';
+
+export interface CreateAppOptions {
+  /** Environment overrides; tests use them, e.g. `{ LOGIN_RATE_LIMIT: '2' }`. */
+  env?: Record<string, string>;
+}
+
+/** `<repo>/apps/web/dist`, found from this file whether it runs from src (tests) or dist. */
+function defaultWebDistDir(): string {
+  const here = typeof __dirname === 'string' ? __dirname : dirname(fileURLToPath(import.meta.url));
+  return resolve(here, '../../web/dist');
+}
+
+/** Builds the configured, not yet listening app: shared by main.ts and the e2e tests. */
+export async function createApp(options: CreateAppOptions = {}): Promise<NestExpressApplication> {
+  const webDistDir = options.env?.WEB_DIST_DIR ?? process.env.WEB_DIST_DIR ?? defaultWebDistDir();
+  const app = await NestFactory.create<NestExpressApplication>(AppModule.forRoot({ env: options.env, webDistDir }), {
+    bufferLogs: true,
+    cors: false,
+  });
+  app.useLogger(app.get(Logger));
+  app.setGlobalPrefix(API_PREFIX);
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        // Sketch photos are shown from blob: URLs before upload.
+        directives: { 'img-src': ["'self'", 'data:', 'blob:'] },
+      },
+    }),
+  );
+  app.use(cookieParser());
+  app.useGlobalFilters(new AllExceptionsFilter());
+  app.useGlobalPipes(new ZodValidationPipe());
+  setUpApiDocs(app);
+  return app;
+}
+
+function setUpApiDocs(app: INestApplication): void {
+  const config = new DocumentBuilder()
+    .setTitle('Linesmith API')
+    .setDescription('Plan, check and order the fluid lines of custom vehicles.')
+    .setVersion('0.1.0')
+    .addBearerAuth()
+    .build();
+  const document = SwaggerModule.createDocument(app, config);
+  SwaggerModule.setup(`${API_PREFIX}/docs`, app, document, { jsonDocumentUrl: `${API_PREFIX}/docs-json` });
+}

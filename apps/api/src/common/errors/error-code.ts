@@ -1,0 +1,28 @@
+/** Machine-readable error codes of the API contract; the web app switches on these. */
+export const ErrorCode = {
+  ValidationFailed: 'validation_failed',
+  InvalidCredentials: 'invalid_credentials',
+  Unauthorized: 'unauthorized',
+  Forbidden: 'forbidden',
+  NotFound: 'not_found',
+  Conflict: 'conflict',
+  RateLimited: 'rate_limited',
+  BadRequest: 'bad_request',
+  Unavailable: 'unavailable',
+  Internal: 'internal_error',
+} as const;
+
+export type ErrorCode = (typeof ErrorCode)[keyof typeof ErrorCode];
+
+export const HTTP_STATUS_OF: Record<ErrorCode, number> = {
+  validation_failed: 400,
+  bad_request: 400,
+  invalid_credentials: 401,
+  unauthorized: 401,
+  forbidden: 403,
+  not_found: 404,
+  conflict: 409,
+  rate_limited: 429,
+  internal_error: 500,
+  unavailable: 503,
+};

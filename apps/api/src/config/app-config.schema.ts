@@ -1,0 +1,47 @@
+import { z } from 'zod';
+
+/** Used only outside production so a fresh checkout starts without secrets. */
+const DEV_JWT_SECRET = 'linesmith-dev-only-secret-change-me';
+
+const booleanFromEnv = z
+  .enum(['true', 'false', '1', '0'])
+  .default('false')
+  .transform((value) => value === 'true' || value === '1');
+
+export const appConfigSchema = z
+  .object({
+    NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+    DATABASE_URL: z.url({ protocol: /^postgres(ql)?$/, error: 'must be a postgres:// URL' }),
+    PORT: z.coerce.number().int().min(1).max(65535).default(3000),
+    JWT_SECRET: z.string().min(16, 'must be at least 16 characters').optional(),
+    JWT_ACCESS_TTL_SEC: z.coerce.number().int().positive().default(900),
+    REFRESH_TTL_DAYS: z.coerce.number().int().positive().default(14),
+    LOGIN_RATE_LIMIT: z.coerce.number().int().positive().default(10),
+    COOKIE_SECURE: booleanFromEnv,
+    LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+    WEB_DIST_DIR: z.string().min(1).optional(),
+  })
+  .superRefine((config, ctx) => {
+    if (config.NODE_ENV === 'production' && !config.JWT_SECRET) {
+      ctx.addIssue({ code: 'custom', path: ['JWT_SECRET'], message: 'is required when NODE_ENV=production' });
+    }
+  })
+  .transform((config) => ({ ...config, JWT_SECRET: config.JWT_SECRET ?? DEV_JWT_SECRET }));
+
+export type AppConfig = z.output<typeof appConfigSchema>;
+
+export class ConfigValidationError extends Error {
+  constructor(readonly problems: string[]) {
+    super(`Invalid configuration:\n${problems.map((p) => `  - ${p}`).join('\n')}`);
+    this.name = 'ConfigValidationError';
+  }
+}
+
+/** Parses environment variables; the error names every offending variable. */
+export function parseAppConfig(env: Record<string, unknown>): AppConfig {
+  const result = appConfigSchema.safeParse(env);
+  if (result.success) return result.data;
+  throw new ConfigValidationError(
+    result.error.issues.map((issue) => `${issue.path.join('.') || '(environment)'}: ${issue.message}`),
+  );
+}
