@@ -1,0 +1,167 @@
+import type { HosePart, Part } from '@linesmith/catalog';
+import { fitsOd } from '@linesmith/catalog';
+import type { CircuitLine } from '../circuit/document.schema.js';
+import { centrelineDetail, type CentrelineDetail } from '../geometry/centreline.js';
+import { subtractIntervals, totalLength, type Interval } from '../geometry/intervals.js';
+import { routePath, type RoutePath } from '../geometry/route-path.js';
+import { pointPxToIn, pointPx, type PointIn } from '../geometry/units.js';
+import { distance } from '../geometry/vec.js';
+import type { ShopRules } from '../rules/shop-rules.js';
+import { cutLength, cutLengthTolerance, requiredSlack } from './cut-length.js';
+import { resolveEndStack, type Mater, type ResolvedStack } from './end-stack.js';
+import { heatExposure, type HeatExposure, type prepareZones } from './heat.js';
+import type { LineReport } from './line-report.js';
+import type { PortEntry } from './port-entry.js';
+import { proposeSupports, unsupportedSpans } from './supports.js';
+
+export type HoseStatus = 'none' | 'missing' | 'not-a-hose' | 'ok';
+
+export interface LineAnalysis {
+  line: CircuitLine;
+  from: PortEntry | undefined;
+  to: PortEntry | undefined;
+  hose: HosePart | undefined;
+  hoseStatus: HoseStatus;
+  stacks: { from: ResolvedStack; to: ResolvedStack };
+  /** Route in inches; null without calibration or without both ports. */
+  centreline: CentrelineDetail | null;
+  path: RoutePath | null;
+  heat: HeatExposure | null;
+  requiredSlackIn: number;
+  report: LineReport;
+}
+
+export interface LineEnvironment {
+  parts: ReadonlyMap<string, Part>;
+  clamps: readonly Part[];
+  rules: ShopRules;
+  pxPerIn: number | null;
+  zones: ReturnType<typeof prepareZones>;
+  ports: ReadonlyMap<string, PortEntry>;
+  mate: Mater;
+}
+
+export const portKey = (unitId: string, portId: string): string => `${unitId}/${portId}`;
+
+/** Works out one line: its route, end stacks, cut length, supports and heat exposure. */
+export function analyseLine(line: CircuitLine, env: LineEnvironment): LineAnalysis {
+  const { rules } = env;
+  const from = env.ports.get(portKey(line.from.unitId, line.from.portId));
+  const to = env.ports.get(portKey(line.to.unitId, line.to.portId));
+  const hosePart = line.hosePartId === null ? undefined : env.parts.get(line.hosePartId);
+  const hose = hosePart?.kind === 'hose' ? hosePart : undefined;
+  const hoseStatus: HoseStatus =
+    line.hosePartId === null ? 'none' : !hosePart ? 'missing' : hose ? 'ok' : 'not-a-hose';
+  const stacks = {
+    from: resolveEndStack('from', from?.port.connection, line.endStacks.from, env.parts, env.mate),
+    to: resolveEndStack('to', to?.port.connection, line.endStacks.to, env.parts, env.mate),
+  };
+
+  let centreline: CentrelineDetail | null = null;
+  let drawnLengthIn: number | null = null;
+  if (env.pxPerIn !== null && from && to) {
+    const perIn = env.pxPerIn;
+    const routeIn: PointIn[] = [
+      pointPxToIn(from.positionPx, perIn),
+      ...line.points.map((p) => pointPxToIn(pointPx(p.x, p.y), perIn)),
+      pointPxToIn(to.positionPx, perIn),
+    ];
+    centreline = centrelineDetail(routeIn, [0, ...line.points.map((p) => p.bendRadiusIn), 0]);
+    drawnLengthIn = routeIn.slice(1).reduce((sum, p, i) => sum + distance(routeIn[i], p), 0);
+  }
+  const measuredLengthIn = line.measuredLengthIn ?? null;
+  const centrelineIn = centreline?.lengthIn ?? null;
+  const basisIn = measuredLengthIn ?? centrelineIn;
+  const basis = measuredLengthIn !== null ? 'measured' : centrelineIn !== null ? 'drawn' : null;
+
+  const crossesMounts = !!from && !!to && from.unit.mountGroup !== to.unit.mountGroup;
+  const requiredSlackIn = crossesMounts && basisIn !== null ? requiredSlack(basisIn, rules) : 0;
+  const slackIn = line.slackOverrideIn ?? requiredSlackIn;
+
+  let exactCutIn: number | null = null;
+  let cutLengthIn: number | null = null;
+  if (basisIn !== null) {
+    const cut = cutLength({
+      overallIn: basisIn,
+      endStackFromIn: stacks.from.lengthIn,
+      endStackToIn: stacks.to.lengthIn,
+      slackIn,
+      roundingIn: rules.cutRoundingIn,
+    });
+    exactCutIn = cut.exactCutIn;
+    cutLengthIn = cut.exactCutIn > 0 ? cut.cutLengthIn : null;
+  }
+
+  // Positions along the line are in the basis length; a measured line stretches the drawn one evenly.
+  const path = centreline ? routePath(centreline) : null;
+  const rawHeat = path ? heatExposure(path, env.zones, rules.sleeveOverlapIn) : null;
+  const stretch = path && basisIn !== null && path.lengthIn > 0 ? basisIn / path.lengthIn : 1;
+  const heat = rawHeat && stretch !== 1 ? stretchHeat(rawHeat, stretch) : rawHeat;
+
+  const lengthForSupports = basisIn ?? 0;
+  const supportsAt = line.supports.map((s) => ({ id: s.id, atIn: s.atIn }));
+  const spans = basisIn === null ? [] : unsupportedSpans(lengthForSupports, supportsAt.map((s) => s.atIn));
+  const placed = line.sleeves.map((s) => ({ ...s, lengthIn: s.endIn - s.startIn }));
+  const requiredIn = heat?.required ?? [];
+  const plannedIn = heat?.planned ?? [];
+
+  const report: LineReport = {
+    lineId: line.id,
+    hosePartId: line.hosePartId,
+    drawnLengthIn,
+    measuredLengthIn,
+    centrelineIn,
+    basis,
+    endStackFromIn: stacks.from.lengthIn,
+    endStackToIn: stacks.to.lengthIn,
+    crossesMounts,
+    slackIn,
+    exactCutIn,
+    cutLengthIn,
+    toleranceIn: cutLengthIn === null ? null : cutLengthTolerance(cutLengthIn),
+    fits: centreline?.fits ?? true,
+    supports: {
+      atIn: supportsAt,
+      spans,
+      longestSpanIn: spans.reduce((m, s) => Math.max(m, s.lengthIn), 0),
+      proposedAtIn: basisIn === null ? [] : proposeSupports(basisIn, rules.supportSpacingIn),
+    },
+    sleeves: {
+      requiredIn,
+      plannedIn,
+      plannedLengthIn: totalLength(plannedIn),
+      placed,
+      uncoveredIn: subtractIntervals(requiredIn, placed.map((s) => ({ start: s.startIn, end: s.endIn })), 1e-6),
+      contact: heat?.contact ?? false,
+      zoneIds: heat?.zones.map((z) => z.zoneId) ?? [],
+    },
+  };
+  const clamp = hose ? pickClamp(env.clamps, hose.attributes.odIn) : undefined;
+  if (clamp) report.clampPartId = clamp.id;
+  return { line, from, to, hose, hoseStatus, stacks, centreline, path, heat, requiredSlackIn, report };
+}
+
+function stretchHeat(heat: HeatExposure, k: number): HeatExposure {
+  const scaleAll = (list: Interval[]) => list.map((i) => ({ start: i.start * k, end: i.end * k }));
+  return {
+    zones: heat.zones.map((z) => ({ ...z, near: scaleAll(z.near) })),
+    required: scaleAll(heat.required),
+    planned: scaleAll(heat.planned),
+    contact: heat.contact,
+  };
+}
+
+/** The tightest-fitting clamp for a hose OD, the cheaper one on a tie. */
+function pickClamp(clamps: readonly Part[], odIn: number): Part | undefined {
+  let best: Part | undefined;
+  let bestWidth = Infinity;
+  for (const clamp of clamps) {
+    if (clamp.kind !== 'clamp' || !fitsOd(clamp, odIn)) continue;
+    const width = clamp.attributes.fitsOd.maxIn - clamp.attributes.fitsOd.minIn;
+    if (width < bestWidth || (width === bestWidth && best && clamp.priceCents < best.priceCents)) {
+      best = clamp;
+      bestWidth = width;
+    }
+  }
+  return best;
+}

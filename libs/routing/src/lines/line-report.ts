@@ -1,0 +1,55 @@
+import type { Interval } from '../geometry/intervals.js';
+import type { Span } from './supports.js';
+
+export interface PlacedSleeve {
+  id: string;
+  startIn: number;
+  endIn: number;
+  lengthIn: number;
+  partId: string | null;
+}
+
+/** Every term of one line's cut length, supports and sleeves, for the cut list and the inspector. */
+export interface LineReport {
+  lineId: string;
+  hosePartId: string | null;
+  /** Port → corners → port with sharp corners, in inches; null without calibration. */
+  drawnLengthIn: number | null;
+  measuredLengthIn: number | null;
+  /** The drawn route with its bend radii (port face to port face); null without calibration. */
+  centrelineIn: number | null;
+  /** Which length the cut is worked from: the measured one wins. */
+  basis: 'measured' | 'drawn' | null;
+  endStackFromIn: number;
+  endStackToIn: number;
+  /** True when the two ports ride on different mount groups. */
+  crossesMounts: boolean;
+  slackIn: number;
+  exactCutIn: number | null;
+  cutLengthIn: number | null;
+  /** ± band of RMA IP-2 Table 4-8 for this cut length. */
+  toleranceIn: number | null;
+  /** False when two bends' tangents overlap on a leg. */
+  fits: boolean;
+  supports: {
+    atIn: Array<{ id: string; atIn: number }>;
+    spans: Span[];
+    longestSpanIn: number;
+    /** Evenly spaced support positions that would satisfy the shop's spacing. */
+    proposedAtIn: number[];
+  };
+  sleeves: {
+    /** Stretches within a heat zone's clearance. */
+    requiredIn: Interval[];
+    /** The required stretches plus the shop's overlap at each end, clamped to the line. */
+    plannedIn: Interval[];
+    plannedLengthIn: number;
+    placed: PlacedSleeve[];
+    /** Required stretches no placed sleeve covers. */
+    uncoveredIn: Interval[];
+    contact: boolean;
+    zoneIds: string[];
+  };
+  /** The catalogue clamp that fits the hose's outside diameter, if any. */
+  clampPartId?: string;
+}

@@ -1,0 +1,23 @@
+import type { Interval } from '../geometry/intervals.js';
+
+export interface Span extends Interval {
+  lengthIn: number;
+}
+
+/** Unsupported spans of a line of `lengthIn`: the ports count as supports at 0 and at the end. */
+export function unsupportedSpans(lengthIn: number, supportsAtIn: readonly number[]): Span[] {
+  const stops = [0, ...supportsAtIn.filter((at) => at > 0 && at < lengthIn), lengthIn].sort((a, b) => a - b);
+  const spans: Span[] = [];
+  for (let i = 0; i < stops.length - 1; i++) {
+    const lengthOfSpan = stops[i + 1] - stops[i];
+    if (lengthOfSpan > 0) spans.push({ start: stops[i], end: stops[i + 1], lengthIn: lengthOfSpan });
+  }
+  return spans;
+}
+
+/** Fewest evenly spaced supports that leave no span longer than `spacingIn`. */
+export function proposeSupports(lengthIn: number, spacingIn: number): number[] {
+  if (!(lengthIn > 0) || !(spacingIn > 0)) return [];
+  const spans = Math.ceil(lengthIn / spacingIn - 1e-9);
+  return Array.from({ length: Math.max(0, spans - 1) }, (_, i) => ((i + 1) * lengthIn) / spans);
+}
