@@ -1,0 +1,36 @@
+import { FluentProvider, makeStyles } from '@fluentui/react-components';
+import { useCallback, useMemo, useState, type ReactNode } from 'react';
+import { readColorScheme, saveColorScheme, type ColorScheme } from './color-scheme';
+import { ColorSchemeContext } from './color-scheme-context';
+import { linesmithDarkTheme, linesmithLightTheme } from './theme';
+
+export interface ThemedAppProps {
+  children: ReactNode;
+  /** Fixed scheme for tests; the app reads the saved choice or the OS preference. */
+  initialScheme?: ColorScheme;
+}
+
+const useStyles = makeStyles({
+  root: { minHeight: '100vh', display: 'flex', flexDirection: 'column' },
+});
+
+export function ThemedApp({ children, initialScheme }: ThemedAppProps) {
+  const styles = useStyles();
+  const [scheme, setScheme] = useState<ColorScheme>(() => initialScheme ?? readColorScheme());
+  const toggle = useCallback(() => {
+    setScheme((current) => {
+      const next = current === 'dark' ? 'light' : 'dark';
+      saveColorScheme(next);
+      return next;
+    });
+  }, []);
+  const value = useMemo(() => ({ scheme, toggle }), [scheme, toggle]);
+
+  return (
+    <ColorSchemeContext.Provider value={value}>
+      <FluentProvider theme={scheme === 'dark' ? linesmithDarkTheme : linesmithLightTheme} className={styles.root}>
+        {children}
+      </FluentProvider>
+    </ColorSchemeContext.Provider>
+  );
+}

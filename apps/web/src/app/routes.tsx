@@ -1,0 +1,107 @@
+import { Navigate, type RouteObject } from 'react-router-dom';
+import { RequireRoles } from '../features/auth/components/RequireRoles';
+import { RequireSession } from '../features/auth/components/RequireSession';
+import { sectionRoles } from '../features/auth/utils/section-roles';
+import { RouteErrorPage } from '../features/shell/components/RouteErrorPage';
+
+/**
+ * Every page is its own chunk (`lazy`), so the sign-in page loads without the shell, the
+ * tables or the icons of the sections. The role guards read the same table as the navigation.
+ */
+export const appRoutes: RouteObject[] = [
+  {
+    path: '/sign-in',
+    errorElement: <RouteErrorPage />,
+    lazy: () => import('../features/auth/components/SignInPage').then((m) => ({ Component: m.SignInPage })),
+  },
+  {
+    path: '/',
+    element: <RequireSession />,
+    errorElement: <RouteErrorPage />,
+    children: [
+      {
+        lazy: () => import('../features/shell/components/AppShell').then((m) => ({ Component: m.AppShell })),
+        children: [
+          {
+            // Errors inside a section keep the top bar and navigation on screen.
+            errorElement: <RouteErrorPage />,
+            children: [
+              { index: true, element: <Navigate to="/builds" replace /> },
+              {
+                element: <RequireRoles anyOf={sectionRoles.builds} />,
+                children: [
+                  {
+                    path: 'builds',
+                    lazy: () =>
+                      import('../features/builds/components/BuildsPage').then((m) => ({ Component: m.BuildsPage })),
+                  },
+                ],
+              },
+              {
+                element: <RequireRoles anyOf={sectionRoles.reviews} />,
+                children: [
+                  {
+                    path: 'reviews',
+                    lazy: () =>
+                      import('../features/reviews/components/ReviewsPage').then((m) => ({ Component: m.ReviewsPage })),
+                  },
+                ],
+              },
+              {
+                element: <RequireRoles anyOf={sectionRoles.orders} />,
+                children: [
+                  {
+                    path: 'orders',
+                    lazy: () =>
+                      import('../features/orders/components/OrdersPage').then((m) => ({ Component: m.OrdersPage })),
+                  },
+                ],
+              },
+              {
+                element: <RequireRoles anyOf={sectionRoles.catalogue} />,
+                children: [
+                  {
+                    path: 'catalogue',
+                    lazy: () =>
+                      import('../features/catalogue/components/CataloguePage').then((m) => ({
+                        Component: m.CataloguePage,
+                      })),
+                  },
+                ],
+              },
+              {
+                element: <RequireRoles anyOf={sectionRoles.reference} />,
+                children: [
+                  {
+                    path: 'reference',
+                    lazy: () =>
+                      import('../features/reference/components/ReferencePage').then((m) => ({
+                        Component: m.ReferencePage,
+                      })),
+                  },
+                ],
+              },
+              {
+                path: 'admin',
+                element: <RequireRoles anyOf={sectionRoles.admin} />,
+                children: [
+                  { index: true, element: <Navigate to="/admin/users" replace /> },
+                  {
+                    path: 'users',
+                    lazy: () =>
+                      import('../features/users/components/UsersPage').then((m) => ({ Component: m.UsersPage })),
+                  },
+                ],
+              },
+              {
+                path: '*',
+                lazy: () =>
+                  import('../features/shell/components/NotFoundPage').then((m) => ({ Component: m.NotFoundPage })),
+              },
+            ],
+          },
+        ],
+      },
+    ],
+  },
+];
