@@ -1,0 +1,28 @@
+import { hashPassword, passwordSchema, verifyPassword } from './password.js';
+
+describe('password hashing', () => {
+  it('uses argon2id with at least the OWASP minimum cost (m=19 MiB, t=2, p=1)', async () => {
+    // OWASP Password Storage Cheat Sheet, "Argon2id": m=19456 (19 MiB), t=2, p=1 as the minimum.
+    // The PHC string format (RFC 9106 section 4 / PHC string format spec) carries the parameters.
+    const phc = await hashPassword('linesmith-demo');
+    const match = /^\$argon2id\$v=19\$m=(\d+),t=(\d+),p=(\d+)\$/.exec(phc);
+    expect(match).not.toBeNull();
+    const [, memory, time, lanes] = match!.map(Number);
+    expect(memory).toBeGreaterThanOrEqual(19456);
+    expect(time).toBeGreaterThanOrEqual(2);
+    expect(lanes).toBeGreaterThanOrEqual(1);
+  });
+
+  it('salts each hash and verifies only the right password', async () => {
+    const [a, b] = await Promise.all([hashPassword('same-password'), hashPassword('same-password')]);
+    expect(a).not.toBe(b);
+    await expect(verifyPassword(a, 'same-password')).resolves.toBe(true);
+    await expect(verifyPassword(a, 'Same-password')).resolves.toBe(false);
+    await expect(verifyPassword('not-a-phc-string', 'same-password')).resolves.toBe(false);
+  });
+
+  it('asks for at least 10 characters', () => {
+    expect(passwordSchema.safeParse('123456789').success).toBe(false);
+    expect(passwordSchema.safeParse('linesmith-demo').success).toBe(true);
+  });
+});
