@@ -55,12 +55,15 @@ export function telltaleOf(family: Family): string {
 
 /** A hint telling two ends apart; starts with the taper check when a pipe thread is involved. */
 export function tellApartHint(a: ThreadRow, b: ThreadRow): string {
+  const metricAgainstInch = (a.family === 'metric') !== (b.family === 'metric');
   const lead =
     a.tapered !== b.tapered
       ? 'Check for taper. '
-      : a.family !== b.family
-        ? 'Check the seat. '
-        : 'Check with a thread gauge. ';
+      : metricAgainstInch
+        ? 'Check the pitch with a thread gauge. '
+        : a.family !== b.family
+          ? 'Check the seat. '
+          : 'Check with a thread gauge. ';
   const sides = a.family === b.family ? [telltale[a.family]] : [telltale[a.family], telltale[b.family]];
   const threads = a.designation === b.designation ? '' : ` ${a.designation} and ${b.designation} look alike.`;
   return `${lead}${capitalise(sides.join('; '))}.${threads}`;

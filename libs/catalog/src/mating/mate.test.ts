@@ -68,6 +68,11 @@ describe('named cases (DOMAIN.md §1)', () => {
     expect(r.code).toBe('joint-thread');
     expect(r.hint).toMatch(/taper/i);
   });
+  it('M16x1.5 (ISO 261) vs 5/8-18 (SAE J512): joint-thread, pitch hint (1.5 mm vs 1.41 mm pitch)', () => {
+    const r = mate(s('metric', 'M16x1.5', 'male'), s('flare45', '3/8', 'female'));
+    expect(r.code).toBe('joint-thread');
+    expect(r.hint).toMatch(/pitch/);
+  });
   it('NPT into NPT of the same size is ok and reminds about sealant', () => {
     const r = mate(s('npt', '3/8', 'male'), s('npt', '3/8', 'female'));
     expect(r).toMatchObject({ ok: true, code: 'ok' });

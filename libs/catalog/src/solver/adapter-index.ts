@@ -1,6 +1,6 @@
 import type { ConnectionSpec } from '../connections.js';
 import type { Part, PartOf } from '../parts/part.schema.js';
-import { connectionKey } from './connection-key.js';
+import { connectionKey, matingKey } from './connection-key.js';
 
 /** Parts that sit between a port and a hose end: adapters, and bulkheads used as adapters. */
 export type ChainPart = PartOf<'adapter'> | PartOf<'bulkhead'>;
@@ -14,6 +14,12 @@ export interface Edge {
   orientation: Orientation;
   inward: ConnectionSpec;
   outward: ConnectionSpec;
+  /** Keys worked out once per catalogue, so the search only does map look-ups. */
+  inwardKey: string;
+  outwardKey: string;
+  /** Key of the end that mates with `inward` / `outward`; undefined when nothing can. */
+  inwardMatingKey: string | undefined;
+  outwardMatingKey: string | undefined;
 }
 
 export interface AdapterIndex {
@@ -43,15 +49,19 @@ export function adapterIndex(parts: readonly Part[]): AdapterIndex {
   for (const part of parts) {
     if (!isChainPart(part)) continue;
     const { a, b } = part.attributes;
+    const keyA = connectionKey(a);
+    const keyB = connectionKey(b);
+    const matingA = matingKey(a);
+    const matingB = matingKey(b);
     const edges: Edge[] = [
-      { part, orientation: 'a-to-port', inward: a, outward: b },
-      { part, orientation: 'b-to-port', inward: b, outward: a },
+      { part, orientation: 'a-to-port', inward: a, outward: b, inwardKey: keyA, outwardKey: keyB, inwardMatingKey: matingA, outwardMatingKey: matingB },
+      { part, orientation: 'b-to-port', inward: b, outward: a, inwardKey: keyB, outwardKey: keyA, inwardMatingKey: matingB, outwardMatingKey: matingA },
     ];
     // A part with two identical ends gives the same chain both ways round: keep one.
-    const distinct = connectionKey(a) === connectionKey(b) ? edges.slice(0, 1) : edges;
+    const distinct = keyA === keyB ? edges.slice(0, 1) : edges;
     for (const edge of distinct) {
-      push(index.byInward, connectionKey(edge.inward), edge);
-      push(index.byOutward, connectionKey(edge.outward), edge);
+      push(index.byInward, edge.inwardKey, edge);
+      push(index.byOutward, edge.outwardKey, edge);
     }
   }
   cache.set(parts, index);

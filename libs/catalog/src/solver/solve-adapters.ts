@@ -39,6 +39,8 @@ interface SearchNode {
   edge: Edge | undefined;
   state: ConnectionSpec;
   stateKey: string;
+  /** Key of the end that mates with `state`; undefined when nothing can. */
+  stateMatingKey: string | undefined;
   count: number;
   /** Lower bound on the final part count: count + parts still needed. */
   bound: number;
@@ -75,7 +77,7 @@ function distancesToGoal(
     for (const key of frontier) {
       for (const edge of byOutward.get(key) ?? []) {
         if (!usable(edge)) continue;
-        const before = matingKey(edge.inward);
+        const before = edge.inwardMatingKey;
         if (before !== undefined && !dist.has(before)) {
           dist.set(before, d);
           next.push(before);
@@ -147,6 +149,7 @@ export function solveAdapters(
     edge: undefined,
     state: port,
     stateKey: portKey,
+    stateMatingKey: matingKey(port),
     count: 0,
     bound: requirement ? Math.max(portDist, 1) : portDist,
     minBoreIn: Number.POSITIVE_INFINITY,
@@ -166,12 +169,12 @@ export function solveAdapters(
       heap.push({ ...node, complete: true, bound: node.count, seq: seq++ });
     }
     if (node.count >= opts.maxParts) continue;
-    const wanted = matingKey(node.state);
+    const wanted = node.stateMatingKey;
     if (wanted === undefined) continue;
     for (const edge of index.byInward.get(wanted) ?? []) {
       if (!usable(edge)) continue;
       if (node.count === 0 && requirement && !meetsRequirement(edge.part, requirement)) continue;
-      const nextKey = connectionKey(edge.outward);
+      const nextKey = edge.outwardKey;
       const remaining = dist.get(nextKey);
       if (remaining === undefined || node.count + 1 + remaining > opts.maxParts) continue;
       if (onPath(node, nextKey)) continue;
@@ -180,6 +183,7 @@ export function solveAdapters(
         edge,
         state: edge.outward,
         stateKey: nextKey,
+        stateMatingKey: edge.outwardMatingKey,
         count: node.count + 1,
         bound: node.count + 1 + remaining,
         minBoreIn: Math.min(node.minBoreIn, edge.part.attributes.boreIn),

@@ -67,7 +67,8 @@ const rowIndex = new Map<string, ThreadRow>(
 );
 
 export function findRow(family: Family, size: string): ThreadRow | undefined {
-  return rowIndex.get(`${family}|${canonicalSize(family, size)}`);
+  // Sizes usually arrive written as the tables write them: skip the parsing then.
+  return rowIndex.get(`${family}|${size}`) ?? rowIndex.get(`${family}|${canonicalSize(family, size)}`);
 }
 
 export function listSizes(family: Family): string[] {
