@@ -39,6 +39,7 @@ describe('parseAppConfig', () => {
 
   it('requires JWT_SECRET in production only', () => {
     expect(() => parseAppConfig({ DATABASE_URL, NODE_ENV: 'production' })).toThrow(/JWT_SECRET: is required/);
+    expect(() => parseAppConfig({ NODE_ENV: 'production' })).toThrow(/DATABASE_URL[\s\S]*JWT_SECRET: is required/);
     const config = parseAppConfig({ DATABASE_URL, NODE_ENV: 'production', JWT_SECRET: 'a-production-secret-of-length' });
     expect(config.JWT_SECRET).toBe('a-production-secret-of-length');
   });

@@ -41,7 +41,10 @@ export class ConfigValidationError extends Error {
 export function parseAppConfig(env: Record<string, unknown>): AppConfig {
   const result = appConfigSchema.safeParse(env);
   if (result.success) return result.data;
-  throw new ConfigValidationError(
-    result.error.issues.map((issue) => `${issue.path.join('.') || '(environment)'}: ${issue.message}`),
-  );
+  const problems = result.error.issues.map((issue) => `${issue.path.join('.') || '(environment)'}: ${issue.message}`);
+  // The production-secret rule only runs once the rest parses; report it together with the others.
+  if (env.NODE_ENV === 'production' && !env.JWT_SECRET && !problems.some((p) => p.startsWith('JWT_SECRET'))) {
+    problems.push('JWT_SECRET: is required when NODE_ENV=production');
+  }
+  throw new ConfigValidationError(problems);
 }

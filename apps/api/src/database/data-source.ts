@@ -7,6 +7,8 @@ function requireDatabaseUrl(): string {
   return url;
 }
 
-/** The DataSource of the scripts and the TypeORM CLI (`npm run typeorm -w @linesmith/api -- ...`). */
-export const dataSource = new DataSource(databaseOptions(requireDatabaseUrl()));
-export default dataSource;
+/**
+ * The DataSource of the scripts and the TypeORM CLI (`npm run typeorm -w @linesmith/api -- ...`);
+ * the CLI insists on a single export.
+ */
+export default new DataSource(databaseOptions(requireDatabaseUrl()));

@@ -1,5 +1,5 @@
 import 'reflect-metadata';
-import { dataSource } from './data-source.js';
+import dataSource from './data-source.js';
 import { runPendingMigrations } from './run-migrations.js';
 
 async function main(): Promise<void> {

@@ -1,5 +1,5 @@
 import 'reflect-metadata';
-import { dataSource } from './data-source.js';
+import dataSource from './data-source.js';
 import { runPendingMigrations } from './run-migrations.js';
 import { SEED_STEPS } from './seed/index.js';
 import type { SeedContext } from './seed/seed-context.js';
