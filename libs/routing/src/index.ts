@@ -1,5 +1,6 @@
 export * from './circuit/document.schema.js';
 export * from './circuit/migrate.js';
+export * from './circuit/circuit-kinds.js';
 export * from './geometry/vec.js';
 export * from './geometry/units.js';
 export * from './geometry/segment.js';
