@@ -139,7 +139,10 @@ export const circuitDocumentSchema = circuitDocumentShape.superRefine((doc, ctx)
   const portsByUnit = new Map<string, Set<string>>();
   const unitIds = new Set<string>();
   doc.units.forEach((unit, u) => {
-    if (unitIds.has(unit.id)) issue(['units', u, 'id'], `Unit id "${unit.id}" is used twice`);
+    if (unitIds.has(unit.id)) {
+      issue(['units', u, 'id'], `Unit id "${unit.id}" is used twice`);
+      return; // lines resolve against the first unit of that id
+    }
     unitIds.add(unit.id);
     const portIds = new Set<string>();
     unit.ports.forEach((port, p) => {

@@ -34,6 +34,7 @@ export interface CentrelineDetail {
  * A leg shorter than the tangents of its two ends cannot hold both bends: `fits` is false.
  * Repeated points are merged (keeping the larger radius); straight-through points add nothing.
  * A full turn-back (θ = π) with a radius cannot be bent at all: it does not fit and counts as sharp.
+ * When the bends do not fit, `lengthIn` is the sharp-cornered length (an upper bound).
  */
 export function centrelineDetail(pointsIn: readonly Vec[], bendRadiiIn: readonly number[]): CentrelineDetail {
   const points: Vec[] = [];
@@ -72,8 +73,9 @@ export function centrelineDetail(pointsIn: readonly Vec[], bendRadiiIn: readonly
     if (tangentAt[i] + tangentAt[i + 1] > leg + TOLERANCE) overlappingLegs.push(i);
   });
   if (overlappingLegs.length > 0) fits = false;
-  const lengthIn =
-    legsIn.reduce((s, l) => s + l, 0) - bends.reduce((s, b) => s + 2 * b.tangentIn - b.arcIn, 0);
+  const sharpIn = legsIn.reduce((s, l) => s + l, 0);
+  // Bends that do not fit have no true length; the sharp-cornered route bounds it from above (cut long).
+  const lengthIn = fits ? sharpIn - bends.reduce((s, b) => s + 2 * b.tangentIn - b.arcIn, 0) : sharpIn;
   return { lengthIn, fits, points, pointIndices, bends, legsIn, overlappingLegs };
 }
 

@@ -53,16 +53,21 @@ export function segmentInsidePolygon(a: Vec, b: Vec, polygon: readonly Vec[]): I
   return mergeIntervals(inside);
 }
 
-/** Parameter intervals of segment ab (0…1) within `clearance` of the polygon's area. */
-export function segmentNearPolygon(a: Vec, b: Vec, polygon: readonly Vec[], clearance: number): Interval[] {
-  const found: Interval[] = segmentInsidePolygon(a, b, polygon);
+/** Parameter intervals of segment ab (0…1) within `clearance` of the polygon's edges (unmerged). */
+export function segmentNearEdges(a: Vec, b: Vec, polygon: readonly Vec[], clearance: number): Interval[] {
+  const found: Interval[] = [];
   if (clearance > 0) {
     forEachEdge(polygon, (e, f) => {
       const range = segmentWithinCapsule(a, b, e, f, clearance);
       if (range) found.push({ start: range[0], end: range[1] });
     });
   }
-  return mergeIntervals(found);
+  return found;
+}
+
+/** Parameter intervals of segment ab (0…1) within `clearance` of the polygon's area. */
+export function segmentNearPolygon(a: Vec, b: Vec, polygon: readonly Vec[], clearance: number): Interval[] {
+  return mergeIntervals([...segmentInsidePolygon(a, b, polygon), ...segmentNearEdges(a, b, polygon, clearance)]);
 }
 
 export interface Box {

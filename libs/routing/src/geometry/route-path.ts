@@ -1,5 +1,4 @@
 import type { Vec } from './vec.js';
-import { add, cross, lerp, normalize, scale, sub } from './vec.js';
 import type { CentrelineDetail } from './centreline.js';
 
 /** Largest angle one chord of a bend may span when a bend is drawn as straight pieces. */
@@ -8,88 +7,119 @@ const MAX_CHORD_RAD = Math.PI / 12;
 /**
  * The route as a polyline whose vertices carry their true distance along the centreline (`s`):
  * straight legs between tangent points, and each bend as short chords. Positions along a line
- * (supports, sleeves, heat intervals) are all measured in this `s`.
+ * (supports, sleeves, heat intervals) are all measured in this `s`. Stored in flat number arrays:
+ * a large circuit has tens of thousands of vertices per evaluation.
  */
 export interface RoutePath {
-  points: Vec[];
-  s: number[];
+  xs: Float64Array;
+  ys: Float64Array;
+  s: Float64Array;
+  count: number;
   lengthIn: number;
 }
 
+const piecesOf = (deflectionRad: number) => Math.max(1, Math.ceil(deflectionRad / MAX_CHORD_RAD));
+
 /** Builds the path of a centreline. A route whose bends do not fit is walked through its sharp corners. */
 export function routePath(detail: CentrelineDetail): RoutePath {
-  const { points: corners, bends } = detail;
-  if (corners.length === 0) return { points: [], s: [], lengthIn: 0 };
-  const points: Vec[] = [corners[0]];
-  const s: number[] = [0];
-  const push = (p: Vec, ds: number) => {
-    points.push(p);
-    s.push(s[s.length - 1] + ds);
+  const { points: corners, bends, fits } = detail;
+  let capacity = corners.length + 1;
+  if (fits) for (const bend of bends) capacity += piecesOf(bend.deflectionRad) + 1;
+  const xs = new Float64Array(capacity);
+  const ys = new Float64Array(capacity);
+  const s = new Float64Array(capacity);
+  let count = 0;
+  const push = (x: number, y: number, ds: number) => {
+    xs[count] = x;
+    ys[count] = y;
+    s[count] = count === 0 ? 0 : s[count - 1] + ds;
+    count++;
   };
-  let cursor = corners[0];
-  const lineTo = (p: Vec) => {
-    const d = Math.hypot(p.x - cursor.x, p.y - cursor.y);
-    if (d > 1e-12) push(p, d);
-    cursor = p;
+  const lineTo = (x: number, y: number) => {
+    const d = Math.hypot(x - xs[count - 1], y - ys[count - 1]);
+    if (d > 1e-12) push(x, y, d);
   };
+  if (corners.length === 0) return { xs, ys, s, count: 0, lengthIn: 0 };
+  push(corners[0].x, corners[0].y, 0);
   for (let i = 1; i < corners.length; i++) {
-    const bend = detail.fits ? bends[i - 1] : undefined;
-    if (i === corners.length - 1 || !bend || bend.tangentIn === 0) {
-      lineTo(corners[i]);
+    const corner = corners[i];
+    const bend = fits && i < corners.length - 1 ? bends[i - 1] : undefined;
+    if (!bend || bend.tangentIn === 0) {
+      lineTo(corner.x, corner.y);
       continue;
     }
-    const corner = corners[i];
-    const inDir = normalize(sub(corner, corners[i - 1]));
-    const outDir = normalize(sub(corners[i + 1], corner));
-    const start = sub(corner, scale(inDir, bend.tangentIn));
-    lineTo(start);
-    const turn = Math.sign(cross(inDir, outDir));
-    const centre = add(start, scale({ x: -inDir.y * turn, y: inDir.x * turn }, bend.radiusIn));
-    const a0 = Math.atan2(start.y - centre.y, start.x - centre.x);
-    const pieces = Math.max(1, Math.ceil(bend.deflectionRad / MAX_CHORD_RAD));
+    const prev = corners[i - 1];
+    const next = corners[i + 1];
+    const inLen = Math.hypot(corner.x - prev.x, corner.y - prev.y);
+    const outLen = Math.hypot(next.x - corner.x, next.y - corner.y);
+    const ix = (corner.x - prev.x) / inLen;
+    const iy = (corner.y - prev.y) / inLen;
+    const ox = (next.x - corner.x) / outLen;
+    const oy = (next.y - corner.y) / outLen;
+    const startX = corner.x - ix * bend.tangentIn;
+    const startY = corner.y - iy * bend.tangentIn;
+    lineTo(startX, startY);
+    const turn = Math.sign(ix * oy - iy * ox);
+    const cx = startX - iy * turn * bend.radiusIn;
+    const cy = startY + ix * turn * bend.radiusIn;
+    const a0 = Math.atan2(startY - cy, startX - cx);
+    const pieces = piecesOf(bend.deflectionRad);
     for (let k = 1; k <= pieces; k++) {
       const a = a0 + (turn * bend.deflectionRad * k) / pieces;
-      const p = { x: centre.x + bend.radiusIn * Math.cos(a), y: centre.y + bend.radiusIn * Math.sin(a) };
-      push(p, bend.arcIn / pieces);
-      cursor = p;
+      push(cx + bend.radiusIn * Math.cos(a), cy + bend.radiusIn * Math.sin(a), bend.arcIn / pieces);
     }
   }
-  return { points, s, lengthIn: s[s.length - 1] };
+  return { xs, ys, s, count, lengthIn: s[count - 1] };
 }
 
 /** Point at distance `at` along the path (clamped to its ends). */
 export function pointAt(path: RoutePath, at: number): Vec {
-  const { points, s } = path;
-  if (points.length === 0) return { x: 0, y: 0 };
-  if (at <= 0) return points[0];
-  if (at >= path.lengthIn) return points[points.length - 1];
+  const { xs, ys, s, count } = path;
+  if (count === 0) return { x: 0, y: 0 };
+  if (at <= 0) return { x: xs[0], y: ys[0] };
+  if (at >= path.lengthIn) return { x: xs[count - 1], y: ys[count - 1] };
   let lo = 0;
-  let hi = s.length - 1;
+  let hi = count - 1;
   while (hi - lo > 1) {
     const mid = (lo + hi) >> 1;
     if (s[mid] <= at) lo = mid;
     else hi = mid;
   }
   const span = s[hi] - s[lo];
-  return span === 0 ? points[lo] : lerp(points[lo], points[hi], (at - s[lo]) / span);
+  const t = span === 0 ? 0 : (at - s[lo]) / span;
+  return { x: xs[lo] + (xs[hi] - xs[lo]) * t, y: ys[lo] + (ys[hi] - ys[lo]) * t };
 }
 
 /** Distance along the path of the path point nearest to p (for dropping a support by clicking). */
 export function distanceAlong(path: RoutePath, p: Vec): number {
+  const { xs, ys, s, count } = path;
   let best = Infinity;
   let bestS = 0;
-  for (let i = 0; i < path.points.length - 1; i++) {
-    const a = path.points[i];
-    const b = path.points[i + 1];
-    const ab = sub(b, a);
-    const lenSq = ab.x * ab.x + ab.y * ab.y;
-    const t = lenSq === 0 ? 0 : Math.max(0, Math.min(1, ((p.x - a.x) * ab.x + (p.y - a.y) * ab.y) / lenSq));
-    const q = lerp(a, b, t);
-    const d = Math.hypot(p.x - q.x, p.y - q.y);
+  for (let i = 0; i < count - 1; i++) {
+    const abx = xs[i + 1] - xs[i];
+    const aby = ys[i + 1] - ys[i];
+    const lenSq = abx * abx + aby * aby;
+    const t = lenSq === 0 ? 0 : Math.max(0, Math.min(1, ((p.x - xs[i]) * abx + (p.y - ys[i]) * aby) / lenSq));
+    const d = Math.hypot(p.x - (xs[i] + abx * t), p.y - (ys[i] + aby * t));
     if (d < best) {
       best = d;
-      bestS = path.s[i] + t * (path.s[i + 1] - path.s[i]);
+      bestS = s[i] + t * (s[i + 1] - s[i]);
     }
   }
   return bestS;
+}
+
+/** Bounding box of the path's vertices. */
+export function pathBounds(path: RoutePath): { minX: number; minY: number; maxX: number; maxY: number } {
+  let minX = Infinity;
+  let minY = Infinity;
+  let maxX = -Infinity;
+  let maxY = -Infinity;
+  for (let i = 0; i < path.count; i++) {
+    if (path.xs[i] < minX) minX = path.xs[i];
+    if (path.xs[i] > maxX) maxX = path.xs[i];
+    if (path.ys[i] < minY) minY = path.ys[i];
+    if (path.ys[i] > maxY) maxY = path.ys[i];
+  }
+  return { minX, minY, maxX, maxY };
 }

@@ -54,63 +54,55 @@ export function segmentSegmentDistance(a: Vec, b: Vec, c: Vec, d: Vec): number {
 
 /**
  * The parameter interval of segment ab (0…1) lying within `radius` of segment ef, i.e. inside
- * the capsule around ef. The capsule is convex, so the answer is one interval or none.
+ * the capsule around ef. The capsule is convex, so the answer is one interval or none: the union
+ * of the stretches inside the two end discs and inside the slab along ef.
  */
 export function segmentWithinCapsule(a: Vec, b: Vec, e: Vec, f: Vec, radius: number): [number, number] | null {
-  const d = sub(b, a);
+  const dx = b.x - a.x;
+  const dy = b.y - a.y;
   let lo = Infinity;
   let hi = -Infinity;
-  const take = (range: [number, number] | null) => {
-    if (!range) return;
-    lo = Math.min(lo, range[0]);
-    hi = Math.max(hi, range[1]);
-  };
-  take(segmentWithinDisc(a, d, e, radius));
-  take(segmentWithinDisc(a, d, f, radius));
-  take(segmentWithinSlab(a, d, e, f, radius));
+  // The two end discs: |a + t·d − centre|² ≤ r², a quadratic in t.
+  const qa = dx * dx + dy * dy;
+  for (const c of [e, f]) {
+    const mx = a.x - c.x;
+    const my = a.y - c.y;
+    const qc = mx * mx + my * my - radius * radius;
+    if (qa < EPS) {
+      if (qc <= 0) [lo, hi] = [Math.min(lo, 0), Math.max(hi, 1)];
+      continue;
+    }
+    const qb = 2 * (mx * dx + my * dy);
+    const disc = qb * qb - 4 * qa * qc;
+    if (disc < 0) continue;
+    const root = Math.sqrt(disc);
+    lo = Math.min(lo, (-qb - root) / (2 * qa));
+    hi = Math.max(hi, (-qb + root) / (2 * qa));
+  }
+  // The slab: 0 ≤ along ≤ |ef| and |across| ≤ r in ef's own frame, both linear in t.
+  const ex = f.x - e.x;
+  const ey = f.y - e.y;
+  const len = Math.hypot(ex, ey);
+  if (len >= EPS) {
+    const ux = ex / len;
+    const uy = ey / len;
+    const mx = a.x - e.x;
+    const my = a.y - e.y;
+    const slab = clipRange(mx * ux + my * uy, dx * ux + dy * uy, 0, len, -Infinity, Infinity);
+    const both = slab && clipRange(-mx * uy + my * ux, -dx * uy + dy * ux, -radius, radius, slab[0], slab[1]);
+    if (both) [lo, hi] = [Math.min(lo, both[0]), Math.max(hi, both[1])];
+  }
   lo = Math.max(0, lo);
   hi = Math.min(1, hi);
   return lo <= hi ? [lo, hi] : null;
 }
 
-/** Parameters t where |a + t·d − centre| ≤ radius (unclipped). */
-function segmentWithinDisc(a: Vec, d: Vec, centre: Vec, radius: number): [number, number] | null {
-  const m = sub(a, centre);
-  const qa = dot(d, d);
-  const qb = 2 * dot(m, d);
-  const qc = dot(m, m) - radius * radius;
-  if (qa < EPS) return qc <= 0 ? [0, 1] : null;
-  const disc = qb * qb - 4 * qa * qc;
-  if (disc < 0) return null;
-  const root = Math.sqrt(disc);
-  return [(-qb - root) / (2 * qa), (-qb + root) / (2 * qa)];
-}
-
-/** Parameters t where a + t·d projects onto ef and lies within `radius` of its line (unclipped). */
-function segmentWithinSlab(a: Vec, d: Vec, e: Vec, f: Vec, radius: number): [number, number] | null {
-  const ef = sub(f, e);
-  const len = Math.hypot(ef.x, ef.y);
-  if (len < EPS) return null;
-  const ux = ef.x / len;
-  const uy = ef.y / len;
-  const m = sub(a, e);
-  let lo = -Infinity;
-  let hi = Infinity;
-  // Clip against lo ≤ v0 + t·dv ≤ hi for each of the two axes of the edge's frame.
-  const clip = (v0: number, dv: number, min: number, max: number): boolean => {
-    if (Math.abs(dv) < EPS) return v0 >= min && v0 <= max;
-    let t0 = (min - v0) / dv;
-    let t1 = (max - v0) / dv;
-    if (t0 > t1) [t0, t1] = [t1, t0];
-    lo = Math.max(lo, t0);
-    hi = Math.min(hi, t1);
-    return lo <= hi;
-  };
-  const along0 = m.x * ux + m.y * uy;
-  const alongD = d.x * ux + d.y * uy;
-  const across0 = -m.x * uy + m.y * ux;
-  const acrossD = -d.x * uy + d.y * ux;
-  if (!clip(along0, alongD, 0, len)) return null;
-  if (!clip(across0, acrossD, -radius, radius)) return null;
-  return [lo, hi];
+/** Narrows [lo, hi] to the t where min ≤ v0 + t·dv ≤ max; null when nothing is left. */
+function clipRange(v0: number, dv: number, min: number, max: number, lo: number, hi: number): [number, number] | null {
+  if (Math.abs(dv) < EPS) return v0 >= min && v0 <= max ? [lo, hi] : null;
+  const t0 = (min - v0) / dv;
+  const t1 = (max - v0) / dv;
+  const from = Math.max(lo, Math.min(t0, t1));
+  const to = Math.min(hi, Math.max(t0, t1));
+  return from <= to ? [from, to] : null;
 }

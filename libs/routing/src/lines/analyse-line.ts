@@ -3,8 +3,8 @@ import { fitsOd } from '@linesmith/catalog';
 import type { CircuitLine } from '../circuit/document.schema.js';
 import { centrelineDetail, type CentrelineDetail } from '../geometry/centreline.js';
 import { subtractIntervals, totalLength, type Interval } from '../geometry/intervals.js';
-import { routePath, type RoutePath } from '../geometry/route-path.js';
-import { pointPxToIn, pointPx, type PointIn } from '../geometry/units.js';
+import { routePath } from '../geometry/route-path.js';
+import { pointIn, pointPxToIn, type PointIn } from '../geometry/units.js';
 import { distance } from '../geometry/vec.js';
 import type { ShopRules } from '../rules/shop-rules.js';
 import { cutLength, cutLengthTolerance, requiredSlack } from './cut-length.js';
@@ -25,7 +25,6 @@ export interface LineAnalysis {
   stacks: { from: ResolvedStack; to: ResolvedStack };
   /** Route in inches; null without calibration or without both ports. */
   centreline: CentrelineDetail | null;
-  path: RoutePath | null;
   heat: HeatExposure | null;
   requiredSlackIn: number;
   report: LineReport;
@@ -61,11 +60,9 @@ export function analyseLine(line: CircuitLine, env: LineEnvironment): LineAnalys
   let drawnLengthIn: number | null = null;
   if (env.pxPerIn !== null && from && to) {
     const perIn = env.pxPerIn;
-    const routeIn: PointIn[] = [
-      pointPxToIn(from.positionPx, perIn),
-      ...line.points.map((p) => pointPxToIn(pointPx(p.x, p.y), perIn)),
-      pointPxToIn(to.positionPx, perIn),
-    ];
+    const routeIn: PointIn[] = [pointPxToIn(from.positionPx, perIn)];
+    for (const p of line.points) routeIn.push(pointIn(p.x / perIn, p.y / perIn));
+    routeIn.push(pointPxToIn(to.positionPx, perIn));
     centreline = centrelineDetail(routeIn, [0, ...line.points.map((p) => p.bendRadiusIn), 0]);
     drawnLengthIn = routeIn.slice(1).reduce((sum, p, i) => sum + distance(routeIn[i], p), 0);
   }
@@ -138,7 +135,7 @@ export function analyseLine(line: CircuitLine, env: LineEnvironment): LineAnalys
   };
   const clamp = hose ? pickClamp(env.clamps, hose.attributes.odIn) : undefined;
   if (clamp) report.clampPartId = clamp.id;
-  return { line, from, to, hose, hoseStatus, stacks, centreline, path, heat, requiredSlackIn, report };
+  return { line, from, to, hose, hoseStatus, stacks, centreline, heat, requiredSlackIn, report };
 }
 
 function stretchHeat(heat: HeatExposure, k: number): HeatExposure {

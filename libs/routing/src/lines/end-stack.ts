@@ -7,15 +7,22 @@ export type Mater = (a: ConnectionSpec, b: ConnectionSpec) => MateResult;
 
 /** mate() remembers its answers for one evaluation: a circuit repeats the same few connections. */
 export function cachedMate(): Mater {
-  const cache = new Map<string, MateResult>();
+  // Keyed by the connection objects themselves (ports and parts are shared), then by value.
+  const byObject = new WeakMap<ConnectionSpec, WeakMap<ConnectionSpec, MateResult>>();
+  const byValue = new Map<string, MateResult>();
   const key = (c: ConnectionSpec) => `${c.family}|${c.size}|${c.gender}`;
   return (a, b) => {
+    let row = byObject.get(a);
+    let result = row?.get(b);
+    if (result) return result;
     const k = `${key(a)}>${key(b)}`;
-    let result = cache.get(k);
+    result = byValue.get(k);
     if (!result) {
       result = mate(a, b);
-      cache.set(k, result);
+      byValue.set(k, result);
     }
+    if (!row) byObject.set(a, (row = new WeakMap()));
+    row.set(b, result);
     return result;
   };
 }

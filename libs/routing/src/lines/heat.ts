@@ -1,6 +1,6 @@
 import type { Vec } from '../geometry/vec.js';
-import type { RoutePath } from '../geometry/route-path.js';
-import { boundingBox, boxesOverlap, segmentInsidePolygon, segmentNearPolygon, type Box } from '../geometry/polygon.js';
+import { pathBounds, type RoutePath } from '../geometry/route-path.js';
+import { boundingBox, boxesOverlap, segmentInsidePolygon, segmentNearEdges, type Box } from '../geometry/polygon.js';
 import { clampIntervals, growIntervals, mergeIntervals, type Interval } from '../geometry/intervals.js';
 
 export interface HeatZoneIn {
@@ -36,27 +36,29 @@ export const prepareZones = (zones: readonly HeatZoneIn[]): PreparedZone[] =>
 /** Heat exposure of one route against the circuit's heat zones (all in inches). */
 export function heatExposure(path: RoutePath, zones: readonly PreparedZone[], overlapIn: number): HeatExposure {
   const exposures: ZoneExposure[] = [];
-  const routeBox = boundingBox(path.points);
+  if (zones.length === 0 || path.count < 2) return { zones: exposures, required: [], planned: [], contact: false };
+  const routeBox = pathBounds(path);
+  const { xs, ys, s } = path;
   for (const zone of zones) {
     if (!boxesOverlap(routeBox, zone.box)) continue;
+    const { minX, minY, maxX, maxY } = zone.box;
     const near: Interval[] = [];
     let contact = false;
-    for (let i = 0; i < path.points.length - 1; i++) {
-      const a = path.points[i];
-      const b = path.points[i + 1];
-      const chordBox: Box = {
-        minX: Math.min(a.x, b.x),
-        minY: Math.min(a.y, b.y),
-        maxX: Math.max(a.x, b.x),
-        maxY: Math.max(a.y, b.y),
-      };
-      if (!boxesOverlap(chordBox, zone.box)) continue;
-      const s0 = path.s[i];
-      const ds = path.s[i + 1] - s0;
-      for (const t of segmentNearPolygon(a, b, zone.polygon, zone.clearanceIn)) {
+    for (let i = 0; i < path.count - 1; i++) {
+      // Most chords are far from every zone: reject them on their bounding box without allocating.
+      const [ax, ay, bx, by] = [xs[i], ys[i], xs[i + 1], ys[i + 1]];
+      if ((ax > bx ? ax : bx) < minX || (ax < bx ? ax : bx) > maxX) continue;
+      if ((ay > by ? ay : by) < minY || (ay < by ? ay : by) > maxY) continue;
+      const a = { x: ax, y: ay };
+      const b = { x: bx, y: by };
+      const s0 = s[i];
+      const ds = s[i + 1] - s0;
+      const inside = segmentInsidePolygon(a, b, zone.polygon);
+      if (inside.length > 0) contact = true;
+      for (const t of inside) near.push({ start: s0 + t.start * ds, end: s0 + t.end * ds });
+      for (const t of segmentNearEdges(a, b, zone.polygon, zone.clearanceIn)) {
         near.push({ start: s0 + t.start * ds, end: s0 + t.end * ds });
       }
-      if (!contact && segmentInsidePolygon(a, b, zone.polygon).length > 0) contact = true;
     }
     if (near.length > 0 || contact) exposures.push({ zoneId: zone.id, near: mergeIntervals(near), contact });
   }
