@@ -2,6 +2,7 @@ import { Navigate, type RouteObject } from 'react-router-dom';
 import { RequireRoles } from '../features/auth/components/RequireRoles';
 import { RequireSession } from '../features/auth/components/RequireSession';
 import { sectionRoles } from '../features/auth/utils/section-roles';
+import { PageLoading } from '../features/shell/components/PageLoading';
 import { RouteErrorPage } from '../features/shell/components/RouteErrorPage';
 
 /**
@@ -12,12 +13,14 @@ export const appRoutes: RouteObject[] = [
   {
     path: '/sign-in',
     errorElement: <RouteErrorPage />,
+    hydrateFallbackElement: <PageLoading />,
     lazy: () => import('../features/auth/components/SignInPage').then((m) => ({ Component: m.SignInPage })),
   },
   {
     path: '/',
     element: <RequireSession />,
     errorElement: <RouteErrorPage />,
+    hydrateFallbackElement: <PageLoading />,
     children: [
       {
         lazy: () => import('../features/shell/components/AppShell').then((m) => ({ Component: m.AppShell })),

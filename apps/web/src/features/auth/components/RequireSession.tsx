@@ -1,5 +1,5 @@
-import { Spinner } from '@fluentui/react-components';
 import { Navigate, Outlet, useLocation } from 'react-router-dom';
+import { PageLoading } from '../../shell/components/PageLoading';
 import { useSession } from '../hooks/useSession';
 
 /** Route element: signed-out users go to sign-in and come back to where they were heading. */
@@ -8,7 +8,7 @@ export function RequireSession() {
   const location = useLocation();
 
   if (state.status === 'restoring') {
-    return <Spinner label="Opening your session…" style={{ margin: 'auto' }} />;
+    return <PageLoading label="Opening your session…" />;
   }
   if (state.status === 'signed-out') {
     // After a deliberate sign-out the next person starts at the home page, not at the last one's.

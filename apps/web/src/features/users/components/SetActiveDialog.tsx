@@ -68,6 +68,7 @@ export function SetActiveDialog({ user, onClose }: SetActiveDialogProps) {
             )}
           </DialogContent>
           <DialogActions>
+            {/* First in order, so the dialog opens with focus on the harmless choice. */}
             <Button appearance="secondary" onClick={onClose} disabled={updateUser.isPending}>
               {alreadyDone ? 'Close' : 'Cancel'}
             </Button>

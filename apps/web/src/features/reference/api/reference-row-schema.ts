@@ -1,0 +1,18 @@
+import type { ReferenceRow } from '@linesmith/catalog';
+import { z } from 'zod';
+
+/** A row of `threadTable(family)` as the API sends it; tied to the catalog's type by `satisfies`. */
+export const referenceRowSchema = z.object({
+  size: z.string().min(1),
+  designation: z.string().min(1),
+  majorDiameterIn: z.number().positive(),
+  tpi: z.number().positive().optional(),
+  pitchMm: z.number().positive().optional(),
+  tubeOdIn: z.number().positive().optional(),
+  tapered: z.boolean(),
+  basicPitchDiameterIn: z.number().positive().optional(),
+  e0: z.number().positive().optional(),
+  l2: z.number().positive().optional(),
+  seal: z.string().optional(),
+  source: z.string().min(1),
+}) satisfies z.ZodType<ReferenceRow>;

@@ -1,0 +1,1 @@
+import { defaultShopRules, demoParts as _unused, evaluateCircuit, formatLength } from '@linesmith/routing';
