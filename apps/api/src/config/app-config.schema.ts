@@ -20,10 +20,25 @@ export const appConfigSchema = z
     COOKIE_SECURE: booleanFromEnv,
     LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
     WEB_DIST_DIR: z.string().min(1).optional(),
+    STORAGE_DRIVER: z.enum(['local', 's3']).default('local'),
+    /** Local driver folder; defaults to `<repo>/.data/uploads`. */
+    STORAGE_DIR: z.string().min(1).optional(),
+    S3_ENDPOINT: z.url().optional(),
+    S3_BUCKET: z.string().min(1).optional(),
+    S3_REGION: z.string().min(1).default('us-east-1'),
+    S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+    S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+    S3_FORCE_PATH_STYLE: booleanFromEnv,
   })
   .superRefine((config, ctx) => {
     if (config.NODE_ENV === 'production' && !config.JWT_SECRET) {
       ctx.addIssue({ code: 'custom', path: ['JWT_SECRET'], message: 'is required when NODE_ENV=production' });
+    }
+    if (config.STORAGE_DRIVER === 's3' && !config.S3_BUCKET) {
+      ctx.addIssue({ code: 'custom', path: ['S3_BUCKET'], message: 'is required when STORAGE_DRIVER=s3' });
+    }
+    if (Boolean(config.S3_ACCESS_KEY_ID) !== Boolean(config.S3_SECRET_ACCESS_KEY)) {
+      ctx.addIssue({ code: 'custom', path: ['S3_SECRET_ACCESS_KEY'], message: 'set both S3 keys or neither' });
     }
   })
   .transform((config) => ({ ...config, JWT_SECRET: config.JWT_SECRET ?? DEV_JWT_SECRET }));
