@@ -301,7 +301,7 @@ describe('Reference › Rules', () => {
 
   it('shows the safety note at the foot of the page', async () => {
     openReference('rules');
-    const note = await screen.findByRole('group', { name: 'Safety' }).catch(() => screen.getByLabelText('Safety'));
+    const note = await screen.findByLabelText('Safety');
     expect(note).toHaveTextContent(/take precedence over Linesmith's checks/);
   });
 
