@@ -1,5 +1,5 @@
 import type { Vec } from './vec.js';
-import { deflection, distance, sub } from './vec.js';
+import { distance } from './vec.js';
 
 const SAME_POINT = 1e-9;
 const TOLERANCE = 1e-9;
@@ -37,26 +37,43 @@ export interface CentrelineDetail {
  * When the bends do not fit, `lengthIn` is the sharp-cornered length (an upper bound).
  */
 export function centrelineDetail(pointsIn: readonly Vec[], bendRadiiIn: readonly number[]): CentrelineDetail {
+  // Written with plain loops and locals: a large circuit runs this over thousands of corners per evaluation.
   const points: Vec[] = [];
   const pointIndices: number[] = [];
   const radii: number[] = [];
-  pointsIn.forEach((p, i) => {
+  for (let i = 0; i < pointsIn.length; i++) {
+    const p = pointsIn[i];
     const r = Math.max(0, bendRadiiIn[i] ?? 0);
     const last = points.length - 1;
     if (last >= 0 && distance(points[last], p) < SAME_POINT) {
-      radii[last] = Math.max(radii[last], r);
-      return;
+      if (r > radii[last]) radii[last] = r;
+      continue;
     }
     points.push(p);
     pointIndices.push(i);
     radii.push(r);
-  });
-  const legsIn = points.slice(1).map((p, i) => distance(points[i], p));
+  }
+  const n = points.length;
+  const legsIn: number[] = [];
+  let sharpIn = 0;
+  for (let i = 0; i < n - 1; i++) {
+    const leg = distance(points[i], points[i + 1]);
+    legsIn.push(leg);
+    sharpIn += leg;
+  }
   const bends: Bend[] = [];
-  const tangentAt = new Array<number>(points.length).fill(0);
+  const tangentAt: number[] = [0];
   let fits = true;
-  for (let i = 1; i < points.length - 1; i++) {
-    const theta = deflection(sub(points[i], points[i - 1]), sub(points[i + 1], points[i]));
+  let bendSavingIn = 0;
+  for (let i = 1; i < n - 1; i++) {
+    const prev = points[i - 1];
+    const here = points[i];
+    const next = points[i + 1];
+    const ix = here.x - prev.x;
+    const iy = here.y - prev.y;
+    const ox = next.x - here.x;
+    const oy = next.y - here.y;
+    const theta = Math.atan2(Math.abs(ix * oy - iy * ox), ix * ox + iy * oy);
     const radius = radii[i];
     let tangent = radius * Math.tan(theta / 2);
     let arc = radius * theta;
@@ -65,17 +82,18 @@ export function centrelineDetail(pointsIn: readonly Vec[], bendRadiiIn: readonly
       tangent = 0;
       arc = 0;
     }
-    tangentAt[i] = tangent;
+    tangentAt.push(tangent);
+    bendSavingIn += 2 * tangent - arc;
     bends.push({ pointIndex: pointIndices[i], deflectionRad: theta, radiusIn: radius, tangentIn: tangent, arcIn: arc });
   }
+  tangentAt.push(0);
   const overlappingLegs: number[] = [];
-  legsIn.forEach((leg, i) => {
-    if (tangentAt[i] + tangentAt[i + 1] > leg + TOLERANCE) overlappingLegs.push(i);
-  });
+  for (let i = 0; i < legsIn.length; i++) {
+    if (tangentAt[i] + tangentAt[i + 1] > legsIn[i] + TOLERANCE) overlappingLegs.push(i);
+  }
   if (overlappingLegs.length > 0) fits = false;
-  const sharpIn = legsIn.reduce((s, l) => s + l, 0);
   // Bends that do not fit have no true length; the sharp-cornered route bounds it from above (cut long).
-  const lengthIn = fits ? sharpIn - bends.reduce((s, b) => s + 2 * b.tangentIn - b.arcIn, 0) : sharpIn;
+  const lengthIn = fits ? sharpIn - bendSavingIn : sharpIn;
   return { lengthIn, fits, points, pointIndices, bends, legsIn, overlappingLegs };
 }
 

@@ -1,6 +1,7 @@
 import type { Vec } from '../geometry/vec.js';
 import { pathBounds, type RoutePath } from '../geometry/route-path.js';
-import { boundingBox, boxesOverlap, segmentInsidePolygon, segmentNearEdges, type Box } from '../geometry/polygon.js';
+import { boundingBox, boxesOverlap, segmentInsidePolygon, type Box } from '../geometry/polygon.js';
+import { segmentWithinCapsule } from '../geometry/segment.js';
 import { clampIntervals, growIntervals, mergeIntervals, type Interval } from '../geometry/intervals.js';
 
 export interface HeatZoneIn {
@@ -26,12 +27,36 @@ export interface HeatExposure {
   contact: boolean;
 }
 
-interface PreparedZone extends HeatZoneIn {
+interface PreparedEdge {
+  e: Vec;
+  f: Vec;
+  /** The edge's box grown by the clearance: chords outside it cannot come near this edge. */
   box: Box;
 }
 
+interface PreparedZone extends HeatZoneIn {
+  /** The zone's own box, and the box grown by the clearance. */
+  area: Box;
+  box: Box;
+  edges: PreparedEdge[];
+}
+
 export const prepareZones = (zones: readonly HeatZoneIn[]): PreparedZone[] =>
-  zones.map((z) => ({ ...z, box: boundingBox(z.polygon, z.clearanceIn) }));
+  zones.map((z) => ({
+    ...z,
+    area: boundingBox(z.polygon),
+    box: boundingBox(z.polygon, z.clearanceIn),
+    edges: z.polygon.map((e, i) => {
+      const f = z.polygon[(i + 1) % z.polygon.length];
+      return { e, f, box: boundingBox([e, f], z.clearanceIn) };
+    }),
+  }));
+
+const chordMisses = (ax: number, ay: number, bx: number, by: number, box: Box): boolean =>
+  (ax > bx ? ax : bx) < box.minX ||
+  (ax < bx ? ax : bx) > box.maxX ||
+  (ay > by ? ay : by) < box.minY ||
+  (ay < by ? ay : by) > box.maxY;
 
 /** Heat exposure of one route against the circuit's heat zones (all in inches). */
 export function heatExposure(path: RoutePath, zones: readonly PreparedZone[], overlapIn: number): HeatExposure {
@@ -41,23 +66,29 @@ export function heatExposure(path: RoutePath, zones: readonly PreparedZone[], ov
   const { xs, ys, s } = path;
   for (const zone of zones) {
     if (!boxesOverlap(routeBox, zone.box)) continue;
-    const { minX, minY, maxX, maxY } = zone.box;
     const near: Interval[] = [];
     let contact = false;
     for (let i = 0; i < path.count - 1; i++) {
-      // Most chords are far from every zone: reject them on their bounding box without allocating.
-      const [ax, ay, bx, by] = [xs[i], ys[i], xs[i + 1], ys[i + 1]];
-      if ((ax > bx ? ax : bx) < minX || (ax < bx ? ax : bx) > maxX) continue;
-      if ((ay > by ? ay : by) < minY || (ay < by ? ay : by) > maxY) continue;
+      // Most chords are far from every zone: reject them on bounding boxes before any allocation.
+      const ax = xs[i];
+      const ay = ys[i];
+      const bx = xs[i + 1];
+      const by = ys[i + 1];
+      if (chordMisses(ax, ay, bx, by, zone.box)) continue;
       const a = { x: ax, y: ay };
       const b = { x: bx, y: by };
       const s0 = s[i];
       const ds = s[i + 1] - s0;
-      const inside = segmentInsidePolygon(a, b, zone.polygon);
-      if (inside.length > 0) contact = true;
-      for (const t of inside) near.push({ start: s0 + t.start * ds, end: s0 + t.end * ds });
-      for (const t of segmentNearEdges(a, b, zone.polygon, zone.clearanceIn)) {
-        near.push({ start: s0 + t.start * ds, end: s0 + t.end * ds });
+      if (!chordMisses(ax, ay, bx, by, zone.area)) {
+        const inside = segmentInsidePolygon(a, b, zone.polygon);
+        if (inside.length > 0) contact = true;
+        for (const t of inside) near.push({ start: s0 + t.start * ds, end: s0 + t.end * ds });
+      }
+      if (zone.clearanceIn <= 0) continue;
+      for (const edge of zone.edges) {
+        if (chordMisses(ax, ay, bx, by, edge.box)) continue;
+        const t = segmentWithinCapsule(a, b, edge.e, edge.f, zone.clearanceIn);
+        if (t) near.push({ start: s0 + t[0] * ds, end: s0 + t[1] * ds });
       }
     }
     if (near.length > 0 || contact) exposures.push({ zoneId: zone.id, near: mergeIntervals(near), contact });

@@ -6,7 +6,10 @@ export interface Span extends Interval {
 
 /** Unsupported spans of a line of `lengthIn`: the ports count as supports at 0 and at the end. */
 export function unsupportedSpans(lengthIn: number, supportsAtIn: readonly number[]): Span[] {
-  const stops = [0, ...supportsAtIn.filter((at) => at > 0 && at < lengthIn), lengthIn].sort((a, b) => a - b);
+  const stops = [0];
+  for (const at of supportsAtIn) if (at > 0 && at < lengthIn) stops.push(at);
+  stops.push(lengthIn);
+  if (supportsAtIn.length > 1) stops.sort((a, b) => a - b);
   const spans: Span[] = [];
   for (let i = 0; i < stops.length - 1; i++) {
     const lengthOfSpan = stops[i + 1] - stops[i];
@@ -19,5 +22,7 @@ export function unsupportedSpans(lengthIn: number, supportsAtIn: readonly number
 export function proposeSupports(lengthIn: number, spacingIn: number): number[] {
   if (!(lengthIn > 0) || !(spacingIn > 0)) return [];
   const spans = Math.ceil(lengthIn / spacingIn - 1e-9);
-  return Array.from({ length: Math.max(0, spans - 1) }, (_, i) => ((i + 1) * lengthIn) / spans);
+  const at: number[] = [];
+  for (let i = 1; i < spans; i++) at.push((i * lengthIn) / spans);
+  return at;
 }
