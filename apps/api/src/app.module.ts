@@ -9,7 +9,12 @@ import { AppConfigModule } from './config/app-config.module.js';
 import { AppConfigService } from './config/app-config.service.js';
 import { databaseOptions } from './database/database-options.js';
 import { HealthModule } from './health/health.module.js';
+import { PartsModule } from './parts/parts.module.js';
+import { ReferenceModule } from './reference/reference.module.js';
+import { RulesModule } from './rules/rules.module.js';
+import { ShopRulesModule } from './shop-rules/shop-rules.module.js';
 import { ShopsModule } from './shops/shops.module.js';
+import { SuppliersModule } from './suppliers/suppliers.module.js';
 import { UsersModule } from './users/users.module.js';
 
 export interface AppModuleOptions {
@@ -42,6 +47,11 @@ export class AppModule {
         UsersModule,
         AuthModule,
         HealthModule,
+        SuppliersModule,
+        PartsModule,
+        ShopRulesModule,
+        ReferenceModule,
+        RulesModule,
       ],
     };
   }

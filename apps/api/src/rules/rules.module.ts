@@ -1,0 +1,13 @@
+import { Module } from '@nestjs/common';
+import { PartsModule } from '../parts/parts.module.js';
+import { ShopRulesModule } from '../shop-rules/shop-rules.module.js';
+import { RulesController } from './rules.controller.js';
+import { RulesService } from './rules.service.js';
+
+@Module({
+  imports: [PartsModule, ShopRulesModule],
+  controllers: [RulesController],
+  providers: [RulesService],
+  exports: [RulesService],
+})
+export class RulesModule {}
