@@ -13,7 +13,7 @@ export interface DuplicateSelectionArgs {
   idMap?: Map<string, string>;
 }
 
-const plain = <T>(value: T): T => structuredClone(isDraft(value) ? current(value) : value);
+const plain = <T>(value: T): T => structuredClone(isDraft(value) ? (current(value as Draft<T>) as T) : value);
 
 /**
  * Copies the selected units (with fresh port ids), heat zones, and every line whose two units were

@@ -68,5 +68,8 @@ export function distanceAlongLine(geometry: LinePathIn, sketch: Point, pxPerIn: 
 
 /** The drawn route with its bends as flat sketch coordinates, for Konva's Line. */
 export function pathPoints(geometry: LinePathIn, pxPerIn: number): number[] {
-  return geometry.path.points.flatMap((p) => [p.x * pxPerIn, p.y * pxPerIn]);
+  const { xs, ys, count } = geometry.path;
+  const flat: number[] = [];
+  for (let i = 0; i < count; i++) flat.push(xs[i] * pxPerIn, ys[i] * pxPerIn);
+  return flat;
 }
