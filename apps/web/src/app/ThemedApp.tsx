@@ -18,12 +18,10 @@ export function ThemedApp({ children, initialScheme }: ThemedAppProps) {
   const styles = useStyles();
   const [scheme, setScheme] = useState<ColorScheme>(() => initialScheme ?? readColorScheme());
   const toggle = useCallback(() => {
-    setScheme((current) => {
-      const next = current === 'dark' ? 'light' : 'dark';
-      saveColorScheme(next);
-      return next;
-    });
-  }, []);
+    const next = scheme === 'dark' ? 'light' : 'dark';
+    saveColorScheme(next);
+    setScheme(next);
+  }, [scheme]);
   const value = useMemo(() => ({ scheme, toggle }), [scheme, toggle]);
 
   return (

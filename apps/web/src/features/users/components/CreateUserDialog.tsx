@@ -16,6 +16,7 @@ import {
 } from '@fluentui/react-components';
 import { useState, type FormEvent } from 'react';
 import { ApiError } from '../../../lib/api-error';
+import { describeError } from '../../../lib/describe-error';
 import { fieldErrors } from '../../../lib/field-errors';
 import { useCreateUser } from '../hooks/useCreateUser';
 import {
@@ -72,11 +73,9 @@ export function CreateUserDialog({ open, onClose }: CreateUserDialogProps) {
     } catch (error) {
       if (error instanceof ApiError && error.code === 'conflict') {
         setErrors({ email: error.message || 'A user with this e-mail address already exists.' });
-      } else if (error instanceof ApiError && error.issues.length > 0) {
-        setErrors(fieldErrors<keyof CreateUserFormValues>(error.issues));
-        setFormError(error.message);
       } else {
-        setFormError(error instanceof Error ? error.message : 'The user could not be created.');
+        if (error instanceof ApiError) setErrors(fieldErrors<keyof CreateUserFormValues>(error.issues));
+        setFormError(describeError(error, 'The user could not be created.'));
       }
     }
   }

@@ -17,6 +17,7 @@ import {
 } from '@fluentui/react-components';
 import { useState, type FormEvent } from 'react';
 import { ApiError } from '../../../lib/api-error';
+import { describeError } from '../../../lib/describe-error';
 import { fieldErrors } from '../../../lib/field-errors';
 import { conflictCurrentUser } from '../api/conflict-current-user';
 import type { User } from '../api/user-schema';
@@ -73,7 +74,7 @@ export function EditUserDialog({ user, onClose }: EditUserDialogProps) {
       if (error instanceof ApiError && error.issues.length > 0) {
         setErrors(fieldErrors<keyof EditUserFormValues>(error.issues));
       }
-      setFormError(error instanceof Error ? error.message : 'The change could not be saved.');
+      setFormError(describeError(error, 'The change could not be saved.'));
     }
   }
 

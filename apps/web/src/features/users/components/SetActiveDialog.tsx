@@ -10,6 +10,7 @@ import {
   MessageBarBody,
   Spinner,
 } from '@fluentui/react-components';
+import { describeError } from '../../../lib/describe-error';
 import { useState } from 'react';
 import { conflictCurrentUser } from '../api/conflict-current-user';
 import type { User } from '../api/user-schema';
@@ -37,7 +38,7 @@ export function SetActiveDialog({ user, onClose }: SetActiveDialogProps) {
     } catch (error) {
       const current = conflictCurrentUser(error);
       if (current) setConflict(current);
-      else setFormError(error instanceof Error ? error.message : 'The change could not be saved.');
+      else setFormError(describeError(error, 'The change could not be saved.'));
     }
   }
 

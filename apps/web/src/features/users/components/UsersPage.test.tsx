@@ -217,4 +217,33 @@ describe('Admin › Users', () => {
     await waitFor(() => expect(screen.queryByRole('alertdialog')).not.toBeInTheDocument());
     expect(fetchMock.callsTo('PATCH', `/api/users/${fabricator.id}`)[0].body).toEqual({ version: 1, active: false });
   });
+
+  it("shows the API's reason when an admin tries to drop their own admin role (400)", async () => {
+    const owner = staff[0];
+    const fetchMock = usersApi().on('PATCH', `/api/users/${owner.id}`, () =>
+      jsonResponse(400, {
+        statusCode: 400,
+        code: 'validation_failed',
+        message: 'Some fields are not valid.',
+        issues: [{ path: 'roles', message: 'You cannot remove your own admin role.' }],
+      }),
+    );
+    renderApp({ path: '/admin/users', user: demoUsers.admin, fetchMock });
+    const user = userEvent.setup();
+    await rowNames();
+
+    await user.click(screen.getByRole('button', { name: 'Edit Dana Whitcombe' }));
+    const dialog = await screen.findByRole('dialog', { name: 'Edit Dana Whitcombe' });
+    await user.click(within(dialog).getByRole('checkbox', { name: /^Fabricator/ }));
+    await user.click(within(dialog).getByRole('checkbox', { name: /^Admin/ }));
+    await user.click(within(dialog).getByRole('button', { name: 'Save' }));
+
+    expect(await within(dialog).findByRole('alert')).toHaveTextContent(
+      'Some fields are not valid. You cannot remove your own admin role.',
+    );
+    expect(within(dialog).getByRole('group', { name: 'Roles' })).toHaveAccessibleDescription(
+      'You cannot remove your own admin role.',
+    );
+    expect(fetchMock.callsTo('PATCH', `/api/users/${owner.id}`)[0].body).toEqual({ version: 1, roles: ['fabricator'] });
+  });
 });
