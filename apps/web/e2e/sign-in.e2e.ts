@@ -24,7 +24,7 @@ describe('demo users sign in and see the navigation of their role', () => {
     it(`${role} (${email})`, async () => {
       const page = await context.newPage();
       await signIn(page, email);
-      const nav = page.getByRole('navigation', { name: /main/i });
+      const nav = page.getByRole('navigation', { name: 'Sections' });
       await nav.getByRole('link', { name: 'Reference' }).waitFor();
       for (const section of allSections) {
         const count = await nav.getByRole('link', { name: section, exact: true }).count();
