@@ -4,6 +4,8 @@ import { TypeOrmModule } from '@nestjs/typeorm';
 import { LoggerModule } from 'nestjs-pino';
 import { existsSync } from 'node:fs';
 import { AuthModule } from './auth/auth.module.js';
+import { BuildsModule } from './builds/builds.module.js';
+import { CircuitsModule } from './circuits/circuits.module.js';
 import { loggerOptions } from './common/logging/logger-options.js';
 import { AppConfigModule } from './config/app-config.module.js';
 import { AppConfigService } from './config/app-config.service.js';
@@ -15,6 +17,7 @@ import { RulesModule } from './rules/rules.module.js';
 import { ShopRulesModule } from './shop-rules/shop-rules.module.js';
 import { ShopsModule } from './shops/shops.module.js';
 import { SuppliersModule } from './suppliers/suppliers.module.js';
+import { UploadsModule } from './uploads/uploads.module.js';
 import { UsersModule } from './users/users.module.js';
 
 export interface AppModuleOptions {
@@ -52,6 +55,9 @@ export class AppModule {
         ShopRulesModule,
         ReferenceModule,
         RulesModule,
+        BuildsModule,
+        CircuitsModule,
+        UploadsModule,
       ],
     };
   }

@@ -1,9 +1,24 @@
 import { RefreshTokenEntity } from '../auth/refresh-token.entity.js';
+import { BuildEntity } from '../builds/build.entity.js';
+import { CircuitRevisionEntity } from '../circuits/circuit-revision.entity.js';
+import { CircuitEntity } from '../circuits/circuit.entity.js';
 import { PartEntity } from '../parts/part.entity.js';
 import { ShopRulesEntity } from '../shop-rules/shop-rules.entity.js';
 import { ShopEntity } from '../shops/shop.entity.js';
 import { SupplierEntity } from '../suppliers/supplier.entity.js';
+import { UploadEntity } from '../uploads/upload.entity.js';
 import { UserEntity } from '../users/user.entity.js';
 
 /** Every entity, listed explicitly (no globs) so the same list works from TS sources and from dist. */
-export const ENTITIES = [ShopEntity, UserEntity, RefreshTokenEntity, SupplierEntity, PartEntity, ShopRulesEntity];
+export const ENTITIES = [
+  ShopEntity,
+  UserEntity,
+  RefreshTokenEntity,
+  SupplierEntity,
+  PartEntity,
+  ShopRulesEntity,
+  BuildEntity,
+  CircuitEntity,
+  CircuitRevisionEntity,
+  UploadEntity,
+];

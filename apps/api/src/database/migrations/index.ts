@@ -1,6 +1,12 @@
 import { CreateShopsUsersRefreshTokens1764650000000 } from './1764650000000-create-shops-users-refresh-tokens.js';
 import { CreateSuppliersParts1796185836552 } from './1796185836552-create-suppliers-parts.js';
 import { CreateShopRules1796185848071 } from './1796185848071-create-shop-rules.js';
+import { CreateBuildsCircuitsUploads1796185917823 } from './1796185917823-create-builds-circuits-uploads.js';
 
 /** Every migration in order of its timestamp; add new ones at the end. */
-export const MIGRATIONS = [CreateShopsUsersRefreshTokens1764650000000, CreateSuppliersParts1796185836552, CreateShopRules1796185848071];
+export const MIGRATIONS = [
+  CreateShopsUsersRefreshTokens1764650000000,
+  CreateSuppliersParts1796185836552,
+  CreateShopRules1796185848071,
+  CreateBuildsCircuitsUploads1796185917823,
+];

@@ -1,0 +1,38 @@
+import type { Fluid } from '@linesmith/catalog';
+import type { CircuitDocument, CircuitKind } from '@linesmith/routing';
+import type { CircuitStatus } from '../circuit-status.js';
+
+export interface CircuitDto {
+  id: string;
+  buildId: string;
+  name: string;
+  kind: CircuitKind;
+  fluid: Fluid;
+  maxPressurePsi: number;
+  maxTempF: number;
+  status: CircuitStatus;
+  draftVersion: number;
+  version: number;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export interface DraftDto {
+  document: CircuitDocument;
+  draftVersion: number;
+}
+
+export interface RevisionSummaryDto {
+  id: string;
+  circuitId: string;
+  number: number;
+  message: string;
+  authorId: string | null;
+  /** The draft version the snapshot was taken from. */
+  draftVersion: number;
+  createdAt: string;
+}
+
+export interface RevisionDto extends RevisionSummaryDto {
+  document: CircuitDocument;
+}
