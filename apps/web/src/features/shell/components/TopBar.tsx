@@ -1,6 +1,7 @@
 import { Divider, Text, makeStyles, tokens } from '@fluentui/react-components';
 import { Link } from 'react-router-dom';
 import { useSession } from '../../auth/hooks/useSession';
+import { UnitsMenu } from '../../preferences/components/UnitsMenu';
 import { ThemeToggle } from './ThemeToggle';
 import { UserMenu } from './UserMenu';
 import { Wordmark } from './Wordmark';
@@ -39,6 +40,7 @@ export function TopBar() {
         </>
       )}
       <span className={styles.spacer} />
+      <UnitsMenu />
       <ThemeToggle />
       <UserMenu />
     </header>
