@@ -38,6 +38,16 @@ export const appRoutes: RouteObject[] = [
                     lazy: () =>
                       import('../features/builds/components/BuildsPage').then((m) => ({ Component: m.BuildsPage })),
                   },
+                  {
+                    path: 'builds/:buildId',
+                    lazy: () =>
+                      import('../features/builds/components/BuildPage').then((m) => ({ Component: m.BuildPage })),
+                  },
+                  {
+                    path: 'circuits/:circuitId',
+                    lazy: () =>
+                      import('../features/circuits/components/CircuitPage').then((m) => ({ Component: m.CircuitPage })),
+                  },
                 ],
               },
               {
