@@ -93,6 +93,9 @@ describe('parts and suppliers (e2e)', () => {
     expect(idsOf(dash6Adapters.items)).toContain(id('demo-adapter-invf6-f37-6'));
     expect(idsOf(dash6Adapters.items)).not.toContain(id('demo-adapter-orb8-f37-8'));
 
+    const badDash = await testApp.http().get('/api/parts?dash=six').set(as(fabToken)).expect(400);
+    expect(badDash.body.issues[0].path).toBe('dash');
+
     const search = await listAs(fabToken, `search=${encodeURIComponent('LONG-NOSE')}`);
     expect(idsOf(search.items)).toEqual([id('demo-adapter-orb6-f37-6-long')]);
 

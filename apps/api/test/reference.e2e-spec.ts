@@ -25,7 +25,7 @@ describe('reference (e2e)', () => {
   });
 
   const as = (bearer: string) => ({ Authorization: `Bearer ${bearer}` });
-  const post = (path: string, body: unknown, bearer = token) => testApp.http().post(`/api/reference/${path}`).set(as(bearer)).send(body);
+  const post = (path: string, body: object, bearer = token) => testApp.http().post(`/api/reference/${path}`).set(as(bearer)).send(body);
 
   it('asks for a signed-in caller', async () => {
     await testApp.http().get('/api/reference/families').expect(401);

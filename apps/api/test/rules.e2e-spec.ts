@@ -128,7 +128,7 @@ describe('shop rules and rules evaluation (e2e)', () => {
       heatZones: [],
     });
 
-    const evaluate = (doc: unknown) => testApp.http().post('/api/rules/evaluate').set(as(fabToken)).send(doc);
+    const evaluate = (doc: object) => testApp.http().post('/api/rules/evaluate').set(as(fabToken)).send(doc);
 
     it('answers the cut length and flags that evaluateCircuit gives for the same catalogue and rules', async () => {
       const response = await evaluate(coolerLine()).expect(200);

@@ -29,13 +29,12 @@ export const listPartsQuerySchema = z.object({
   /** "-6" or "6": hoses and hose ends of that dash, and ends of that tube size. */
   dash: z
     .string()
-    .optional()
     .transform((text, ctx) => {
-      if (text === undefined) return undefined;
       const dash = parseDash(text);
       if (dash === undefined) ctx.addIssue({ code: 'custom', message: 'Give a dash size such as -6.' });
       return dash;
-    }),
+    })
+    .optional(),
   /** A hose part id: the hose ends, clamps and sleeves that fit that hose. */
   fitsHose: z.uuid('Give the id of a hose in your catalogue.').optional(),
   supplierId: z.uuid('Give the id of one of your suppliers.').optional(),

@@ -1,0 +1,85 @@
+import { demoParts } from '@linesmith/catalog';
+import { circuitDocumentSchema, defaultShopRules, shopRulesSchema, type CircuitDocument } from '@linesmith/routing';
+import { Test } from '@nestjs/testing';
+import { ShopCatalogueService } from '../parts/shop-catalogue.service.js';
+import { ShopRulesService } from '../shop-rules/shop-rules.service.js';
+import { partIdsOf, RulesService } from './rules.service.js';
+
+const SHOP = '11111111-1111-4111-8111-111111111111';
+
+/** A 40 in straight -6 line (10 px/in) from a powertrain ORB port to a chassis 37° port, bare hose ends. */
+function line40(): CircuitDocument {
+  return circuitDocumentSchema.parse({
+    schema: 'linesmith.circuit/1',
+    circuit: { fluid: 'atf', maxPressurePsi: 150, maxTempF: 250 },
+    calibration: { a: { x: 0, y: 0 }, b: { x: 10, y: 0 }, knownIn: 1 },
+    background: null,
+    units: [
+      { id: 't', kind: 'transmission', x: 0, y: 0, mountGroup: 'powertrain', ports: [{ id: 'p', connection: { family: 'orb', size: '-6', gender: 'female' }, role: 'out', dx: 0, dy: 0 }] },
+      { id: 'c', kind: 'cooler', x: 400, y: 0, mountGroup: 'chassis', ports: [{ id: 'p', connection: { family: 'flare37', size: '-6', gender: 'male' }, role: 'feed', dx: 0, dy: 0 }] },
+    ],
+    lines: [
+      {
+        id: 'L1',
+        from: { unitId: 't', portId: 'p' },
+        to: { unitId: 'c', portId: 'p' },
+        hosePartId: 'demo-hose-6-rubber',
+        points: [],
+        endStacks: { from: ['demo-adapter-orb6-f37-6', 'demo-hose-end-6-rubber-0'], to: ['demo-hose-end-6-rubber-0'] },
+        supports: [{ id: 's', atIn: 20 }],
+      },
+    ],
+    heatZones: [],
+  });
+}
+
+describe('RulesService', () => {
+  let service: RulesService;
+  const catalogue = { partsOf: jest.fn() };
+  const shopRules = { rulesOf: jest.fn() };
+
+  beforeEach(async () => {
+    jest.resetAllMocks();
+    catalogue.partsOf.mockResolvedValue(demoParts);
+    shopRules.rulesOf.mockResolvedValue(defaultShopRules);
+    const moduleRef = await Test.createTestingModule({
+      providers: [
+        RulesService,
+        { provide: ShopCatalogueService, useValue: catalogue },
+        { provide: ShopRulesService, useValue: shopRules },
+      ],
+    }).compile();
+    service = moduleRef.get(RulesService);
+  });
+
+  it('collects every part id a document names', () => {
+    const doc = line40();
+    doc.units[0].ports[0].plugPartId = 'plug';
+    doc.lines[0].sleeves = [{ id: 'sl', startIn: 1, endIn: 2, partId: 'sleeve' }];
+    expect([...partIdsOf(doc)].sort()).toEqual(
+      ['demo-adapter-orb6-f37-6', 'demo-hose-6-rubber', 'demo-hose-end-6-rubber-0', 'plug', 'sleeve'].sort(),
+    );
+  });
+
+  it("evaluates with the caller's catalogue and shop rules", async () => {
+    const result = await service.evaluate(SHOP, line40());
+    expect(catalogue.partsOf).toHaveBeenCalledWith(SHOP);
+    expect(shopRules.rulesOf).toHaveBeenCalledWith(SHOP);
+    // 40 − (0.95 + 0.80) − 0.80 + max(1.5, 4 % × 40 = 1.6) = 39.05 → next 1/8 in: 39.125 (DOMAIN §4, common practice).
+    expect(result.lines[0].slackIn).toBeCloseTo(1.6, 9);
+    expect(result.lines[0].cutLengthIn).toBe(39.125);
+
+    // A shop that wants at least 3 in of slack across mounts: 40 − 2.55 + 3 = 40.45 → 40.5.
+    shopRules.rulesOf.mockResolvedValue(shopRulesSchema.parse({ slackMinIn: 3 }));
+    const roomy = await service.evaluate(SHOP, line40());
+    expect(roomy.lines[0].cutLengthIn).toBe(40.5);
+  });
+
+  it('still finds the clamps and seals the engine picks from the whole catalogue', async () => {
+    const result = await service.evaluate(SHOP, line40());
+    // The clamp that fits the -6 rubber hose (OD 0.69 in in the 0.63–0.72 in range) and the ORB O-ring are found.
+    expect(result.lines[0].clampPartId).toBe('demo-clamp-11-16');
+    expect(result.bom.rows.map((row) => row.partId)).toEqual(expect.arrayContaining(['demo-oring-906', 'demo-clamp-11-16']));
+    expect(result.flags.find((flag) => flag.code === 'missing-part')).toBeUndefined();
+  });
+});
