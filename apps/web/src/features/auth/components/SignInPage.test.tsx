@@ -102,4 +102,22 @@ describe('sign-in page', () => {
     await screen.findByRole('heading', { name: 'Builds' });
     expect(router.state.location.pathname).toBe('/builds');
   });
+
+  it('returns to sign-in with the current page as `next` when the session cannot be refreshed', async () => {
+    const fetchMock = createFetchMock().on('GET', '/api/users', () =>
+      errorResponse(401, 'unauthorized', 'The access token has expired.'),
+    );
+    let refreshes = 0;
+    fetchMock.on('POST', '/api/auth/refresh', () =>
+      (refreshes += 1) === 1
+        ? jsonResponse(200, sessionBody(demoUsers.admin))
+        : errorResponse(401, 'unauthorized', 'The refresh token was revoked.'),
+    );
+    const { router } = renderApp({ path: '/admin/users?x=1', user: demoUsers.admin, fetchMock });
+
+    expect(await screen.findByRole('button', { name: 'Sign in' })).toBeInTheDocument();
+    expect(router.state.location.pathname).toBe('/sign-in');
+    expect(router.state.location.search).toBe(`?next=${encodeURIComponent('/admin/users?x=1')}`);
+    expect(refreshes).toBe(2);
+  });
 });
