@@ -98,11 +98,24 @@ export const appRoutes: RouteObject[] = [
                 path: 'admin',
                 element: <RequireRoles anyOf={sectionRoles.admin} />,
                 children: [
-                  { index: true, element: <Navigate to="/admin/users" replace /> },
                   {
-                    path: 'users',
                     lazy: () =>
-                      import('../features/users/components/UsersPage').then((m) => ({ Component: m.UsersPage })),
+                      import('../features/admin/components/AdminSection').then((m) => ({ Component: m.AdminSection })),
+                    children: [
+                      { index: true, element: <Navigate to="/admin/users" replace /> },
+                      {
+                        path: 'users',
+                        lazy: () =>
+                          import('../features/users/components/UsersPage').then((m) => ({ Component: m.UsersPage })),
+                      },
+                      {
+                        path: 'shop-rules',
+                        lazy: () =>
+                          import('../features/shop-rules/components/ShopRulesPage').then((m) => ({
+                            Component: m.ShopRulesPage,
+                          })),
+                      },
+                    ],
                   },
                 ],
               },

@@ -1,0 +1,5 @@
+/** The pages of the Admin section, in display order (all of them admin-only, like the section). */
+export const adminPages = [
+  { to: '/admin/users', label: 'Users' },
+  { to: '/admin/shop-rules', label: 'Shop rules' },
+] as const;
