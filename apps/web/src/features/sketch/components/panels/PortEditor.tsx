@@ -1,0 +1,114 @@
+import { Button, Checkbox, Field, makeStyles, Select, tokens } from '@fluentui/react-components';
+import { families, familyLabel, listSizes, type Family, type Gender } from '@linesmith/catalog';
+import { portRoleSchema, type CircuitPort, type PortRole } from '@linesmith/routing';
+import { useEditor } from '../../hooks/editor-context';
+import { deletePort } from '../../model/commands/delete-port';
+import { setConnectionSpec } from '../../model/commands/set-connection-spec';
+import { updatePort } from '../../model/commands/update-port';
+import { CommitInput } from './CommitInput';
+
+export interface PortEditorProps {
+  unitId: string;
+  port: CircuitPort;
+  highlighted: boolean;
+}
+
+const useStyles = makeStyles({
+  box: { border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusMedium, padding: tokens.spacingVerticalXS, display: 'grid', gap: tokens.spacingVerticalXXS },
+  highlighted: { border: `2px solid ${tokens.colorBrandStroke1}` },
+  row: { display: 'grid', gridTemplateColumns: '1fr 1fr 1fr', gap: tokens.spacingHorizontalXS },
+});
+
+/** One port: connection family, size (from the standard's table), gender, role, requirement and lubrication. */
+export function PortEditor({ unitId, port, highlighted }: PortEditorProps) {
+  const styles = useStyles();
+  const { store } = useEditor();
+  const ref = { unitId, portId: port.id };
+  const setSpec = (change: Partial<CircuitPort['connection']>) => {
+    const next = { ...port.connection, ...change };
+    // A new family keeps the size only where that family has it.
+    if (change.family && !listSizes(change.family).includes(next.size)) next.size = listSizes(change.family)[0];
+    store.run(setConnectionSpec, { ...ref, connection: next });
+  };
+  const name = port.label || 'port';
+  return (
+    <fieldset className={`${styles.box} ${highlighted ? styles.highlighted : ''}`} aria-label={`Port ${name}`}>
+      <Field label="Port name" size="small">
+        <CommitInput size="small" value={port.label} onCommit={(label) => store.run(updatePort, { ...ref, changes: { label } })} />
+      </Field>
+      <div className={styles.row}>
+        <Field label="Connection" size="small">
+          <Select size="small" value={port.connection.family} onChange={(_, d) => setSpec({ family: d.value as Family })}>
+            {families.map((f) => (
+              <option key={f} value={f}>
+                {familyLabel(f)}
+              </option>
+            ))}
+          </Select>
+        </Field>
+        <Field label="Size" size="small">
+          <Select size="small" value={port.connection.size} onChange={(_, d) => setSpec({ size: d.value })}>
+            {listSizes(port.connection.family).map((size) => (
+              <option key={size} value={size}>
+                {size}
+              </option>
+            ))}
+          </Select>
+        </Field>
+        <Field label="Gender" size="small">
+          <Select size="small" value={port.connection.gender} onChange={(_, d) => setSpec({ gender: d.value as Gender })}>
+            <option value="female">female</option>
+            <option value="male">male</option>
+          </Select>
+        </Field>
+      </div>
+      <Field label="Role" size="small">
+        <Select size="small" value={port.role} onChange={(_, d) => store.run(updatePort, { ...ref, changes: { role: d.value as PortRole } })}>
+          {portRoleSchema.options.map((r) => (
+            <option key={r} value={r}>
+              {r}
+            </option>
+          ))}
+        </Select>
+      </Field>
+      <Checkbox
+        label="Feeds lubrication (fluid leaving here lubricates a gear train or bearings)"
+        checked={!!port.feedsLubrication}
+        onChange={(_, d) => store.run(updatePort, { ...ref, changes: { feedsLubrication: d.checked === true } })}
+      />
+      <div className={styles.row}>
+        <Field label="Requirement (feature)" size="small" hint="e.g. long-nose">
+          <CommitInput
+            size="small"
+            value={port.requirement?.feature ?? ''}
+            onCommit={(feature) =>
+              store.run(updatePort, {
+                ...ref,
+                changes: {
+                  requirement: feature.trim()
+                    ? { feature: feature.trim(), reason: port.requirement?.reason ?? 'the unit maker asks for it' }
+                    : null,
+                },
+              })
+            }
+          />
+        </Field>
+        <Field label="Reason" size="small" style={{ gridColumn: 'span 2' }}>
+          <CommitInput
+            size="small"
+            disabled={!port.requirement}
+            value={port.requirement?.reason ?? ''}
+            onCommit={(reason) =>
+              port.requirement && reason.trim()
+                ? store.run(updatePort, { ...ref, changes: { requirement: { feature: port.requirement.feature, reason: reason.trim() } } })
+                : 'A reason is required'
+            }
+          />
+        </Field>
+      </div>
+      <Button size="small" appearance="subtle" onClick={() => store.run(deletePort, ref)}>
+        Delete port {name}
+      </Button>
+    </fieldset>
+  );
+}

@@ -1,0 +1,78 @@
+import type { HeatZone } from '@linesmith/routing';
+import type { Context } from 'konva/lib/Context';
+import type { KonvaEventObject } from 'konva/lib/Node';
+import { Group, Line, Text } from 'react-konva';
+
+export interface HeatZoneShapeProps {
+  zone: HeatZone;
+  selected: boolean;
+  draggable: boolean;
+  zoom: number;
+  /** Clearance drawn around the zone, in sketch pixels (null without calibration). */
+  clearancePx: number | null;
+  onSelect(event: KonvaEventObject<MouseEvent>): void;
+  onDragStart(): void;
+  onDragMove(dx: number, dy: number): void;
+  onDragEnd(): void;
+}
+
+const HATCH_GAP = 10;
+
+/** A heat zone: red outline, red hatching clipped to the polygon, its label, and its clearance. */
+export function HeatZoneShape({ zone, selected, draggable, zoom, clearancePx, ...handlers }: HeatZoneShapeProps) {
+  const flat = zone.polygon.flatMap((p) => [p.x, p.y]);
+  const xs = zone.polygon.map((p) => p.x);
+  const ys = zone.polygon.map((p) => p.y);
+  const [minX, maxX, minY, maxY] = [Math.min(...xs), Math.max(...xs), Math.min(...ys), Math.max(...ys)];
+  const hatch: number[][] = [];
+  for (let c = minX - (maxY - minY); c < maxX; c += HATCH_GAP) hatch.push([c, maxY, c + (maxY - minY), minY]);
+  const clip = (ctx: Context) => {
+    ctx.beginPath();
+    zone.polygon.forEach((p, i) => (i === 0 ? ctx.moveTo(p.x, p.y) : ctx.lineTo(p.x, p.y)));
+    ctx.closePath();
+  };
+  return (
+    <Group
+      draggable={draggable}
+      onDragStart={(e) => {
+        e.cancelBubble = true;
+        handlers.onDragStart();
+      }}
+      onDragMove={(e) => {
+        // The group moves as a whole; turn its offset into a move of the polygon and reset it.
+        const { x, y } = e.target.position();
+        e.target.position({ x: 0, y: 0 });
+        handlers.onDragMove(x, y);
+      }}
+      onDragEnd={handlers.onDragEnd}
+      name="zone"
+    >
+      {clearancePx !== null && clearancePx > 0 && (
+        <Line points={flat} closed stroke="#fca5a5" strokeWidth={2 * clearancePx} lineJoin="round" opacity={0.25} listening={false} />
+      )}
+      <Group clipFunc={clip} listening={false}>
+        {hatch.map((h, i) => (
+          <Line key={i} points={h} stroke="#dc2626" strokeWidth={1.5 / zoom} opacity={0.6} />
+        ))}
+      </Group>
+      <Line
+        points={flat}
+        closed
+        fill="rgba(220, 38, 38, 0.12)"
+        stroke={selected ? '#2563eb' : '#dc2626'}
+        strokeWidth={(selected ? 3 : 2) / zoom}
+        onClick={handlers.onSelect}
+       
+      />
+      <Text
+        text={`🔥 ${zone.label || zone.kind}`}
+        x={minX}
+        y={minY - 16 / zoom}
+        fontSize={12 / zoom}
+        fill="#991b1b"
+        fontStyle="bold"
+        listening={false}
+      />
+    </Group>
+  );
+}

@@ -1,0 +1,86 @@
+import type { CircuitDocument, CircuitLine, LineReport } from '@linesmith/routing';
+import type { KonvaEventObject } from 'konva/lib/Node';
+import { Fragment } from 'react';
+import { Group, Line } from 'react-konva';
+import { linePathIn, pathPoints, positionAlong, routePx, type LinePathIn } from '../../model/geometry/line-route';
+import type { Point } from '../../model/tools';
+import type { FluidStyle } from '../../utils/fluid-colours';
+import { DimensionLabel } from './DimensionLabel';
+import { SleeveBand } from './SleeveBand';
+import { SupportMark } from './SupportMark';
+
+export interface LineShapeProps {
+  doc: CircuitDocument;
+  line: CircuitLine;
+  report: LineReport | undefined;
+  pxPerIn: number | null;
+  fluid: FluidStyle;
+  selected: boolean;
+  zoom: number;
+  label: string;
+  onSelect(event: KonvaEventObject<MouseEvent>): void;
+  onDoubleClick(point: Point): void;
+}
+
+/** Sketch points along [startIn, endIn] of the line, for sleeves. */
+function stretchPoints(geometry: LinePathIn, startIn: number, endIn: number, pxPerIn: number): number[] {
+  const steps = Math.max(2, Math.ceil((endIn - startIn) / 0.5));
+  const flat: number[] = [];
+  for (let i = 0; i <= steps; i++) {
+    const p = positionAlong(geometry, startIn + ((endIn - startIn) * i) / steps, pxPerIn);
+    flat.push(p.x, p.y);
+  }
+  return flat;
+}
+
+/** A line: its route with bends in the fluid-class colour, sleeves, supports and the cut-length label. */
+export function LineShape({ doc, line, report, pxPerIn, fluid, selected, zoom, label, onSelect, onDoubleClick }: LineShapeProps) {
+  const route = routePx(doc, line);
+  if (!route) return null;
+  const basisIn = report?.measuredLengthIn ?? null;
+  const geometry = pxPerIn ? linePathIn(doc, line, pxPerIn, basisIn) : null;
+  const points = geometry && pxPerIn && report?.fits !== false ? pathPoints(geometry, pxPerIn) : route.flatMap((p) => [p.x, p.y]);
+  const mid = Math.floor((route.length - 1) / 2);
+  const labelAt = { x: (route[mid].x + route[mid + 1].x) / 2, y: (route[mid].y + route[mid + 1].y) / 2 };
+  return (
+    <Group name="line">
+      {geometry &&
+        pxPerIn &&
+        report?.sleeves.uncoveredIn.map((s, i) => (
+          <SleeveBand key={`need-${i}`} points={stretchPoints(geometry, s.start, s.end, pxPerIn)} zoom={zoom} planned />
+        ))}
+      {geometry &&
+        pxPerIn &&
+        line.sleeves.map((s) => <SleeveBand key={s.id} points={stretchPoints(geometry, s.startIn, s.endIn, pxPerIn)} zoom={zoom} />)}
+      {selected && <Line points={points} stroke="#2563eb" strokeWidth={9 / zoom} opacity={0.35} listening={false} lineJoin="round" />}
+      <Line
+        points={points}
+        stroke={fluid.stroke}
+        strokeWidth={4 / zoom}
+        hitStrokeWidth={14 / zoom}
+        lineJoin="round"
+        lineCap="round"
+        dash={line.hosePartId ? undefined : [10 / zoom, 6 / zoom]}
+        onClick={onSelect}
+       
+        onDblClick={(e) => {
+          e.cancelBubble = true;
+          const stage = e.target.getStage();
+          const pointer = stage?.getRelativePointerPosition();
+          if (pointer) onDoubleClick(pointer);
+        }}
+      />
+      {geometry &&
+        pxPerIn &&
+        line.supports.map((s) => {
+          const p = positionAlong(geometry, s.atIn, pxPerIn);
+          return (
+            <Fragment key={s.id}>
+              <SupportMark x={p.x} y={p.y} zoom={zoom} />
+            </Fragment>
+          );
+        })}
+      <DimensionLabel x={labelAt.x + 6 / zoom} y={labelAt.y + 6 / zoom} text={label} style={fluid} zoom={zoom} />
+    </Group>
+  );
+}

@@ -1,0 +1,76 @@
+import type { CircuitUnit } from '@linesmith/routing';
+import type { KonvaEventObject } from 'konva/lib/Node';
+import { Group, Rect, Text } from 'react-konva';
+import { unitSize } from '../../model/unit-presets';
+import { PortShape } from './PortShape';
+
+export interface UnitShapeProps {
+  unit: CircuitUnit;
+  selected: boolean;
+  selectedPortId: string | null;
+  connectedPorts: ReadonlySet<string>;
+  draggable: boolean;
+  zoom: number;
+  onSelect(event: KonvaEventObject<MouseEvent>): void;
+  onSelectPort(portId: string, event: KonvaEventObject<MouseEvent>): void;
+  onDragStart(): void;
+  onDragMove(x: number, y: number): void;
+  onDragEnd(): void;
+}
+
+const mountFill: Record<CircuitUnit['mountGroup'], string> = { powertrain: '#e0e7ff', chassis: '#f3f4f6', axle: '#ecfccb' };
+
+/** A unit: a box turned with the unit, its name and mount group, and its ports on the edges. */
+export function UnitShape(props: UnitShapeProps) {
+  const { unit, selected, zoom } = props;
+  const { width, height } = unitSize(unit.kind);
+  return (
+    <Group
+      x={unit.x}
+      y={unit.y}
+      rotation={unit.rotation}
+      draggable={props.draggable}
+      onDragStart={(e) => {
+        e.cancelBubble = true;
+        props.onDragStart();
+      }}
+      onDragMove={(e) => props.onDragMove(e.target.x(), e.target.y())}
+      onDragEnd={() => props.onDragEnd()}
+      name="unit"
+    >
+      <Rect
+        x={-width / 2}
+        y={-height / 2}
+        width={width}
+        height={height}
+        cornerRadius={6}
+        fill={mountFill[unit.mountGroup]}
+        stroke={selected ? '#2563eb' : '#374151'}
+        strokeWidth={(selected ? 3 : 1.5) / zoom}
+        dash={unit.mountGroup === 'chassis' ? undefined : [8 / zoom, 4 / zoom]}
+        onClick={props.onSelect}
+       
+      />
+      <Text
+        text={`${unit.label || unit.kind}\n${unit.mountGroup}`}
+        x={-width / 2}
+        y={-height / 2 + 6}
+        width={width}
+        align="center"
+        fontSize={12}
+        fill="#111827"
+        listening={false}
+      />
+      {unit.ports.map((port) => (
+        <PortShape
+          key={port.id}
+          port={port}
+          zoom={zoom}
+          selected={props.selectedPortId === port.id}
+          connected={props.connectedPorts.has(`${unit.id}/${port.id}`)}
+          onSelect={(e) => props.onSelectPort(port.id, e)}
+        />
+      ))}
+    </Group>
+  );
+}

@@ -1,0 +1,13 @@
+import type { Part } from '@linesmith/catalog';
+import { evaluateCircuit, type CircuitDocument, type CircuitEvaluation, type ShopRules } from '@linesmith/routing';
+import { useDeferredValue, useMemo } from 'react';
+import { useDebouncedValue } from '../../../lib/useDebouncedValue';
+
+/** Milliseconds of quiet before the circuit is checked again; a drag does not re-check every frame. */
+export const EVALUATION_DEBOUNCE_MS = 150;
+
+/** The rules engine run in the browser on the document, debounced and deferred so typing stays smooth. */
+export function useCircuitEvaluation(doc: CircuitDocument, parts: readonly Part[], rules: ShopRules): CircuitEvaluation {
+  const settled = useDeferredValue(useDebouncedValue(doc, EVALUATION_DEBOUNCE_MS));
+  return useMemo(() => evaluateCircuit(settled, parts, rules), [settled, parts, rules]);
+}
