@@ -33,6 +33,9 @@ export async function createApp(options: CreateAppOptions = {}): Promise<NestExp
   });
   app.useLogger(app.get(Logger));
   app.setGlobalPrefix(API_PREFIX);
+  // A sketch document of a large circuit (hundreds of lines, thousands of corners) exceeds the
+  // 100 kB default; zod still validates every body.
+  app.useBodyParser('json', { limit: '5mb' });
   app.use(
     helmet({
       contentSecurityPolicy: {
