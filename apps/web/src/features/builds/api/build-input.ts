@@ -2,7 +2,7 @@ import type { BuildStatus } from './build-schema';
 
 /** Body of `POST /api/builds` (the server assigns id, version and timestamps). */
 export interface CreateBuildInput {
-  vehicle: { year: number | null; make: string; model: string; engine: string; transmission: string };
+  vehicle: { year: string; make: string; model: string; engine: string; transmission: string };
   customer: { name: string; phone: string; email: string };
   notes: string;
   status: BuildStatus;

@@ -26,7 +26,7 @@ const useStyles = makeStyles({
   notes: { whiteSpace: 'pre-wrap', margin: 0 },
 });
 
-const dash = (value: string | number | null) => (value === null || value === '' ? '—' : value);
+const dash = (value: string) => (value === '' ? '—' : value);
 
 /** Vehicle and customer of the build, with the edit button. */
 export function BuildDetailsPanel({ build, onEdit }: BuildDetailsPanelProps) {
@@ -82,9 +82,10 @@ export function BuildDetailsPanel({ build, onEdit }: BuildDetailsPanelProps) {
           <dd className={styles.value}>
             <BuildStatusBadge status={build.status} />
           </dd>
-          <dt className={styles.term}>Started by</dt>
+          <dt className={styles.term}>Started</dt>
           <dd className={styles.value}>
-            {build.createdBy.displayName}, {formatDateTime(build.createdAt)}
+            {build.createdBy?.displayName ? `${build.createdBy.displayName}, ` : ''}
+            {formatDateTime(build.createdAt)}
           </dd>
           <dt className={styles.term}>Last changed</dt>
           <dd className={styles.value}>{formatDateTime(build.updatedAt)}</dd>

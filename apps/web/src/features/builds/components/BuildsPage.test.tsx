@@ -11,7 +11,7 @@ import { apiBuild } from '../test-support/build-fixtures';
 // &order=&page=&pageSize=` → `{ items, total, page, pageSize }`).
 const customers = ['Corliss Ambry', 'Tamsin Voller', 'Odell Pryce', 'Nadia Hurst', 'Ivo Brennick'];
 const allBuilds: Build[] = customers.map((name, i) =>
-  apiBuild(`b-${i + 1}`, { customer: { name, phone: '', email: '' }, vehicle: { year: 1970 + i, make: 'Harlan', model: `Model ${i + 1}`, engine: '', transmission: '' } }),
+  apiBuild(`b-${i + 1}`, { customer: { name, phone: '', email: '' }, vehicle: { year: String(1970 + i), make: 'Harlan', model: `Model ${i + 1}`, engine: '', transmission: '' } }),
 );
 
 /** A builds API over an in-memory list, searching and paging like the contract says. */
@@ -43,7 +43,7 @@ describe('Builds table', () => {
 
     expect(await customerColumn()).toEqual(customers);
     const first = fetchMock.callsTo('GET', '/api/builds')[0].url.searchParams;
-    expect(Object.fromEntries(first)).toEqual({ sort: 'updatedAt', order: 'desc', page: '1', pageSize: '25' });
+    expect(Object.fromEntries(first)).toEqual({ sort: 'updatedAt', order: 'desc', direction: 'desc', page: '1', pageSize: '25' });
 
     const user = userEvent.setup();
     await user.keyboard('/');
@@ -158,7 +158,7 @@ describe('Builds table', () => {
 
     await waitFor(() => expect(router.state.location.pathname).toBe('/builds/b-new'));
     expect(fetchMock.callsTo('POST', '/api/builds')[0].body).toEqual({
-      vehicle: { year: 1976, make: 'Harlan', model: 'Half-ton pickup', engine: '', transmission: '' },
+      vehicle: { year: '1976', make: 'Harlan', model: 'Half-ton pickup', engine: '', transmission: '' },
       customer: { name: 'Wren Castell', phone: '', email: 'wren@customer.example' },
       notes: '',
       status: 'open',

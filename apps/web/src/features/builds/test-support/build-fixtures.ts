@@ -6,7 +6,7 @@ const noCircuits = { total: 0, draft: 0, inReview: 0, returned: 0, approved: 0, 
 export function apiBuild(id: string, extra: Partial<Build> = {}): Build {
   return {
     id,
-    vehicle: { year: 1976, make: 'Harlan', model: 'Half-ton pickup', engine: '6.2 L V8', transmission: '4-speed automatic' },
+    vehicle: { year: '1976', make: 'Harlan', model: 'Half-ton pickup', engine: '6.2 L V8', transmission: '4-speed automatic' },
     customer: { name: 'Corliss Ambry', phone: '555-0142', email: 'corliss@customer.example' },
     notes: '',
     status: 'open',

@@ -5,7 +5,7 @@ import type { BuildFormInput, BuildFormValues } from './build-form-schema';
 /** The form's text fields for an existing build. */
 export function buildToFormInput(build: Build): BuildFormInput {
   return {
-    year: build.vehicle.year === null ? '' : String(build.vehicle.year),
+    year: build.vehicle.year,
     make: build.vehicle.make,
     model: build.vehicle.model,
     engine: build.vehicle.engine,

@@ -8,22 +8,18 @@ const required = (max: number, label: string, message: string) => text(max, labe
 export const latestModelYear = (now: Date = new Date()) => now.getFullYear() + 1;
 export const earliestModelYear = 1900;
 
-/** Build a year check against today's date (so a form open over New Year stays right). */
+/** The model year as the shop types it (the API keeps it as text), checked against today's date. */
 function yearField(now: Date) {
   const latest = latestModelYear(now);
   const message = `Enter a year from ${earliestModelYear} to ${latest}, or leave it empty.`;
   return z
     .string()
     .trim()
-    .transform((value, ctx) => {
-      if (value === '') return null;
-      if (!/^\d{4}$/.test(value)) {
-        ctx.addIssue({ code: 'custom', message });
-        return z.NEVER;
-      }
-      return Number(value);
-    })
-    .pipe(z.number().int().min(earliestModelYear, message).max(latest, message).nullable());
+    .refine((value) => {
+      if (value === '') return true;
+      const year = Number(value);
+      return /^\d{4}$/.test(value) && year >= earliestModelYear && year <= latest;
+    }, message);
 }
 
 /** The create/edit build form: what the fabricator types, as text, checked and converted here. */

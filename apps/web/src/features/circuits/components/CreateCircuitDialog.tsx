@@ -95,8 +95,13 @@ export function CreateCircuitDialog({ buildId, onClose }: CreateCircuitDialogPro
     }
     setErrors({});
     const { name, kind, fluid, maxPressure, maxTemp } = parsed.data;
+    // A preset left as shown is sent exactly, not as its rounded bar or °C text converted back.
+    const shown = presetValues(kind, units);
+    const exact = circuitKinds[kind];
+    const maxPressurePsi = values.maxPressure.trim() === shown.maxPressure ? exact.maxPressurePsi : maxPressure;
+    const maxTempF = values.maxTemp.trim() === shown.maxTemp ? exact.maxTempF : maxTemp;
     try {
-      const circuit = await createCircuit.mutateAsync({ name, kind, fluid, maxPressurePsi: maxPressure, maxTempF: maxTemp });
+      const circuit = await createCircuit.mutateAsync({ name, kind, fluid, maxPressurePsi, maxTempF });
       onClose();
       navigate(`/circuits/${encodeURIComponent(circuit.id)}`);
     } catch (error) {

@@ -46,7 +46,8 @@ export function RevisionView({ circuitId, number }: RevisionViewProps) {
       {revision.data && (
         <>
           <Text as="p">
-            {revision.data.message || 'No message'} — {revision.data.author.displayName}, {formatDateTime(revision.data.createdAt)}
+            {revision.data.message || 'No message'} — {revision.data.author?.displayName || 'author not named'},{' '}
+            {formatDateTime(revision.data.createdAt)}
           </Text>
           <DraftSummaryList document={revision.data.document} />
           {check.isPending && <Spinner size="small" label="Checking the revision…" />}

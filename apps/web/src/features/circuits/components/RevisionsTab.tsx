@@ -65,7 +65,7 @@ export function RevisionsTab({ circuitId }: RevisionsTabProps) {
             <TableRow key={revision.id} aria-selected={open === revision.number}>
               <TableCell>{revision.number}</TableCell>
               <TableCell>{revision.message || '—'}</TableCell>
-              <TableCell>{revision.author.displayName}</TableCell>
+              <TableCell>{revision.author?.displayName || '—'}</TableCell>
               <TableCell>{formatDateTime(revision.createdAt)}</TableCell>
               <TableCell>
                 <Button
