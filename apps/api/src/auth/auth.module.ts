@@ -7,6 +7,9 @@ import { TypeOrmModule } from '@nestjs/typeorm';
 import { AppConfigService } from '../config/app-config.service.js';
 import { ShopsModule } from '../shops/shops.module.js';
 import { UsersModule } from '../users/users.module.js';
+import { MailModule } from '../mail/mail.module.js';
+import { AccountLinksController } from './account-links.controller.js';
+import { AccountLinksService } from './account-links.service.js';
 import { AuthController } from './auth.controller.js';
 import { AuthService } from './auth.service.js';
 import { JwtAuthGuard } from './jwt-auth.guard.js';
@@ -15,12 +18,15 @@ import { MeController } from './me.controller.js';
 import { RefreshTokenEntity } from './refresh-token.entity.js';
 import { RefreshTokensService } from './refresh-tokens.service.js';
 import { RolesGuard } from './roles.guard.js';
+import { InvitesController } from './invites.controller.js';
+import { UserTokenEntity } from './user-token.entity.js';
+import { UserTokensService } from './user-tokens.service.js';
 
 const ONE_MINUTE_MS = 60_000;
 
 @Module({
   imports: [
-    TypeOrmModule.forFeature([RefreshTokenEntity]),
+    TypeOrmModule.forFeature([RefreshTokenEntity, UserTokenEntity]),
     PassportModule,
     JwtModule.registerAsync({
       inject: [AppConfigService],
@@ -29,7 +35,7 @@ const ONE_MINUTE_MS = 60_000;
         signOptions: { algorithm: 'HS256', issuer: JWT_ISSUER, expiresIn: config.get('JWT_ACCESS_TTL_SEC') },
       }),
     }),
-    // Only the login route uses the ThrottlerGuard; the limit comes from LOGIN_RATE_LIMIT.
+    // Only the login and account-link routes use the ThrottlerGuard; the limit comes from LOGIN_RATE_LIMIT.
     ThrottlerModule.forRootAsync({
       inject: [AppConfigService],
       useFactory: (config: AppConfigService) => ({
@@ -38,11 +44,14 @@ const ONE_MINUTE_MS = 60_000;
     }),
     UsersModule,
     ShopsModule,
+    MailModule,
   ],
-  controllers: [AuthController, MeController],
+  controllers: [AuthController, MeController, AccountLinksController, InvitesController],
   providers: [
     AuthService,
     RefreshTokensService,
+    UserTokensService,
+    AccountLinksService,
     JwtStrategy,
     // Order matters: who is calling, then what they may do.
     { provide: APP_GUARD, useClass: JwtAuthGuard },

@@ -58,6 +58,11 @@ export class AuthService {
     return this.toMe(user);
   }
 
+  /** Signs in a user whose identity was proven another way (an invitation or reset link). */
+  async sessionFor(user: UserEntity): Promise<Session> {
+    return this.startSession(user, await this.refreshTokens.issue(user.id));
+  }
+
   private async startSession(user: UserEntity, refresh: IssuedRefreshToken): Promise<Session> {
     const claims: AccessTokenClaims = { sub: user.id, shopId: user.shopId, roles: user.roles };
     const accessToken = await this.jwt.signAsync(claims);

@@ -29,6 +29,16 @@ export const appConfigSchema = z
     S3_ACCESS_KEY_ID: z.string().min(1).optional(),
     S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
     S3_FORCE_PATH_STYLE: booleanFromEnv,
+    /** Outgoing mail; the defaults point at the fake SMTP server of `npm start` / `npm test`. */
+    SMTP_HOST: z.string().min(1).default('127.0.0.1'),
+    SMTP_PORT: z.coerce.number().int().min(1).max(65535).default(2525),
+    SMTP_FROM: z.string().min(3).default('Linesmith <no-reply@linesmith.example>'),
+    SMTP_USER: z.string().min(1).optional(),
+    SMTP_PASS: z.string().min(1).optional(),
+    /** The web app's address, used in the links of invitation and password-reset e-mails. */
+    APP_URL: z.url().default('http://localhost:3000'),
+    /** Password-reset e-mails per address and hour (further requests still answer 202). */
+    RESET_RATE_LIMIT: z.coerce.number().int().positive().default(5),
   })
   .superRefine((config, ctx) => {
     if (config.NODE_ENV === 'production' && !config.JWT_SECRET) {

@@ -1,3 +1,8 @@
+import { UserTokenEntity } from '../auth/user-token.entity.js';
+import { OutboxEntity } from '../mail/outbox.entity.js';
+import { OrderLineEntity } from '../orders/order-line.entity.js';
+import { OrderEntity } from '../orders/order.entity.js';
+import { StockAdjustmentEntity } from '../stock/stock-adjustment.entity.js';
 import { RefreshTokenEntity } from '../auth/refresh-token.entity.js';
 import { BuildEntity } from '../builds/build.entity.js';
 import { CircuitRevisionEntity } from '../circuits/circuit-revision.entity.js';
@@ -21,4 +26,9 @@ export const ENTITIES = [
   CircuitEntity,
   CircuitRevisionEntity,
   UploadEntity,
+  OutboxEntity,
+  UserTokenEntity,
+  StockAdjustmentEntity,
+  OrderEntity,
+  OrderLineEntity,
 ];

@@ -2,6 +2,7 @@ import { CreateShopsUsersRefreshTokens1764650000000 } from './1764650000000-crea
 import { CreateSuppliersParts1796185836552 } from './1796185836552-create-suppliers-parts.js';
 import { CreateShopRules1796185848071 } from './1796185848071-create-shop-rules.js';
 import { CreateBuildsCircuitsUploads1796185917823 } from './1796185917823-create-builds-circuits-uploads.js';
+import { CreateOutboxTokensStockOrders1796186373635 } from './1796186373635-create-outbox-tokens-stock-orders.js';
 
 /** Every migration in order of its timestamp; add new ones at the end. */
 export const MIGRATIONS = [
@@ -9,4 +10,5 @@ export const MIGRATIONS = [
   CreateSuppliersParts1796185836552,
   CreateShopRules1796185848071,
   CreateBuildsCircuitsUploads1796185917823,
+  CreateOutboxTokensStockOrders1796186373635,
 ];
