@@ -42,6 +42,8 @@ describe('build page', () => {
     expect(await within(row).findByText('1 caution')).toBeInTheDocument();
     // 23.6875 in = 23-11/16 in (the fixture's one line).
     expect(row).toHaveTextContent('1 line · 23-11/16" hose');
+    // The fixture's bill of materials totals 4845 cents.
+    expect(row).toHaveTextContent('48.45');
   });
 
   // Conversions worked by hand from NIST SP 811 Appendix B (1 psi = 6.894757 kPa; °C = (°F − 32)/1.8):

@@ -34,6 +34,7 @@ export function BuildCircuitsTable({ circuits }: BuildCircuitsTableProps) {
           <TableHeaderCell>Max pressure · temperature</TableHeaderCell>
           <TableHeaderCell>Flags</TableHeaderCell>
           <TableHeaderCell>Cut list</TableHeaderCell>
+          <TableHeaderCell>Parts cost</TableHeaderCell>
         </TableRow>
       </TableHeader>
       <TableBody>

@@ -4,13 +4,14 @@ import { useUnitPreferences } from '../../preferences/hooks/useUnitPreferences';
 import { useCircuitCheck } from '../hooks/useCircuitCheck';
 import { cutListTotals } from '../utils/cut-list-totals';
 import { countFlags } from '../utils/flag-counts';
+import { formatMoney } from '../utils/format-money';
 import { FlagCountBadges } from './FlagCountBadges';
 
 export interface CircuitCheckCellsProps {
   circuitId: string;
 }
 
-/** Flag counts and cut-list totals of one circuit, each row asking for its own check. */
+/** Flag counts, cut-list totals and parts cost of one circuit, each row asking for its own check. */
 export function CircuitCheckCells({ circuitId }: CircuitCheckCellsProps) {
   const { units } = useUnitPreferences();
   const check = useCircuitCheck(circuitId);
@@ -21,6 +22,7 @@ export function CircuitCheckCells({ circuitId }: CircuitCheckCellsProps) {
           <Spinner size="extra-tiny" label="Checking…" />
         </TableCell>
         <TableCell />
+        <TableCell />
       </>
     );
   }
@@ -30,6 +32,7 @@ export function CircuitCheckCells({ circuitId }: CircuitCheckCellsProps) {
         <TableCell>
           <Text size={200}>Check not available</Text>
         </TableCell>
+        <TableCell />
         <TableCell />
       </>
     );
@@ -45,6 +48,10 @@ export function CircuitCheckCells({ circuitId }: CircuitCheckCellsProps) {
           ? 'No lines yet'
           : `${totals.lines} ${totals.lines === 1 ? 'line' : 'lines'} · ${formatLength(totals.totalCutIn, units.length)} hose` +
             (totals.cutLines < totals.lines ? ` (${totals.lines - totals.cutLines} not measured)` : '')}
+      </TableCell>
+      <TableCell>
+        {formatMoney(check.data.bom.totalCents)}
+        {check.data.bom.unpricedRows > 0 ? ' + unpriced parts' : ''}
       </TableCell>
     </>
   );
