@@ -25,3 +25,5 @@ export type { BomRow, BillOfMaterials } from './bom/bom-row.js';
 export { billOfMaterials } from './bom/bill-of-materials.js';
 export { priceOf } from './bom/price.js';
 export * from './evaluate/evaluate-circuit.js';
+export { flagKey } from './rules/flag-key.js';
+export * from './compare/compare-documents.js';
