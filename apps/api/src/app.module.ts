@@ -11,11 +11,13 @@ import { AppConfigModule } from './config/app-config.module.js';
 import { AppConfigService } from './config/app-config.service.js';
 import { databaseOptions } from './database/database-options.js';
 import { HealthModule } from './health/health.module.js';
+import { MailModule } from './mail/mail.module.js';
 import { PartsModule } from './parts/parts.module.js';
 import { ReferenceModule } from './reference/reference.module.js';
 import { RulesModule } from './rules/rules.module.js';
 import { ShopRulesModule } from './shop-rules/shop-rules.module.js';
 import { ShopsModule } from './shops/shops.module.js';
+import { StockModule } from './stock/stock.module.js';
 import { SuppliersModule } from './suppliers/suppliers.module.js';
 import { UploadsModule } from './uploads/uploads.module.js';
 import { UsersModule } from './users/users.module.js';
@@ -58,6 +60,8 @@ export class AppModule {
         BuildsModule,
         CircuitsModule,
         UploadsModule,
+        MailModule,
+        StockModule,
       ],
     };
   }

@@ -1,11 +1,12 @@
 import { Module } from '@nestjs/common';
 import { PartsModule } from '../parts/parts.module.js';
 import { ShopRulesModule } from '../shop-rules/shop-rules.module.js';
+import { ShopsModule } from '../shops/shops.module.js';
 import { RulesController } from './rules.controller.js';
 import { RulesService } from './rules.service.js';
 
 @Module({
-  imports: [PartsModule, ShopRulesModule],
+  imports: [PartsModule, ShopRulesModule, ShopsModule],
   controllers: [RulesController],
   providers: [RulesService],
   exports: [RulesService],

@@ -3,6 +3,7 @@ import { circuitDocumentSchema, defaultShopRules, shopRulesSchema, type CircuitD
 import { Test } from '@nestjs/testing';
 import { ShopCatalogueService } from '../parts/shop-catalogue.service.js';
 import { ShopRulesService } from '../shop-rules/shop-rules.service.js';
+import { ShopsService } from '../shops/shops.service.js';
 import { partIdsOf, RulesService } from './rules.service.js';
 
 const SHOP = '11111111-1111-4111-8111-111111111111';
@@ -37,16 +38,19 @@ describe('RulesService', () => {
   let service: RulesService;
   const catalogue = { partsOf: jest.fn() };
   const shopRules = { rulesOf: jest.fn() };
+  const shops = { getOwnShop: jest.fn() };
 
   beforeEach(async () => {
     jest.resetAllMocks();
     catalogue.partsOf.mockResolvedValue(demoParts);
     shopRules.rulesOf.mockResolvedValue(defaultShopRules);
+    shops.getOwnShop.mockResolvedValue({ id: SHOP, taxRatePercent: 0 });
     const moduleRef = await Test.createTestingModule({
       providers: [
         RulesService,
         { provide: ShopCatalogueService, useValue: catalogue },
         { provide: ShopRulesService, useValue: shopRules },
+        { provide: ShopsService, useValue: shops },
       ],
     }).compile();
     service = moduleRef.get(RulesService);
@@ -59,6 +63,16 @@ describe('RulesService', () => {
     expect([...partIdsOf(doc)].sort()).toEqual(
       ['demo-adapter-orb6-f37-6', 'demo-hose-6-rubber', 'demo-hose-end-6-rubber-0', 'plug', 'sleeve'].sort(),
     );
+  });
+
+  it("taxes the bill of materials at the shop profile's rate", async () => {
+    shops.getOwnShop.mockResolvedValue({ id: SHOP, taxRatePercent: 8.25 });
+    const { bom } = await service.evaluate(SHOP, line40());
+    expect(shops.getOwnShop).toHaveBeenCalledWith(SHOP);
+    expect(bom.subtotalCents).toBeGreaterThan(0);
+    // Plain arithmetic: 8.25 % of the subtotal, rounded to the cent.
+    expect(bom.taxCents).toBe(Math.round(bom.subtotalCents * 0.0825));
+    expect(bom.totalCents).toBe(bom.subtotalCents + bom.taxCents);
   });
 
   it("evaluates with the caller's catalogue and shop rules", async () => {

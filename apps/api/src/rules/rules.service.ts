@@ -3,6 +3,7 @@ import type { Part } from '@linesmith/catalog';
 import { evaluateCircuit, type CircuitDocument, type CircuitEvaluation } from '@linesmith/routing';
 import { ShopCatalogueService } from '../parts/shop-catalogue.service.js';
 import { ShopRulesService } from '../shop-rules/shop-rules.service.js';
+import { ShopsService } from '../shops/shops.service.js';
 
 /** Kinds the engine picks from the whole catalogue by itself: clamps by hose OD, sleeves and seals for the bill of materials. */
 const PICKED_BY_THE_ENGINE = new Set<Part['kind']>(['clamp', 'sleeve', 'seal']);
@@ -25,16 +26,21 @@ export class RulesService {
   constructor(
     private readonly catalogue: ShopCatalogueService,
     private readonly shopRules: ShopRulesService,
+    private readonly shops: ShopsService,
   ) {}
 
   /**
-   * Lines (cut-length terms), flags and bill of materials of a validated document. Part ids the
+   * Lines (cut-length terms), flags and bill of materials (taxed at the shop profile's rate) of a validated document. Part ids the
    * shop does not own are simply unknown to the engine, which flags them.
    */
   async evaluate(shopId: string, doc: CircuitDocument): Promise<CircuitEvaluation> {
-    const [catalogue, rules] = await Promise.all([this.catalogue.partsOf(shopId), this.shopRules.rulesOf(shopId)]);
+    const [catalogue, rules, shop] = await Promise.all([
+      this.catalogue.partsOf(shopId),
+      this.shopRules.rulesOf(shopId),
+      this.shops.getOwnShop(shopId),
+    ]);
     const named = partIdsOf(doc);
     const parts = catalogue.filter((part) => named.has(part.id) || PICKED_BY_THE_ENGINE.has(part.kind));
-    return evaluateCircuit(doc, parts, rules);
+    return evaluateCircuit(doc, parts, rules, { taxRatePercent: shop.taxRatePercent });
   }
 }

@@ -24,7 +24,7 @@ describe('bill of materials', () => {
 
   it('prices sleeve by the foot from its planned length and applies the shop’s tax rate', () => {
     const doc = coolerCircuit((d) => (d.lines[0].sleeves = [{ id: 'v', startIn: 6, endIn: 24, partId: 'sleeve-3-4' }]));
-    const { bom } = evaluateCircuit(doc, testParts, { ...defaultShopRules, taxRatePercent: 8.25 });
+    const { bom } = evaluateCircuit(doc, testParts, defaultShopRules, { taxRatePercent: 8.25 });
     expect(bom.rows.find((r) => r.partId === 'sleeve-3-4')).toMatchObject({ quantity: 18, unit: 'in', priceCents: 2250 });
     expect(bom.taxCents).toBe(Math.round(bom.subtotalCents * 0.0825));
     expect(bom.totalCents).toBe(bom.subtotalCents + bom.taxCents);

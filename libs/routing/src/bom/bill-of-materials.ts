@@ -25,6 +25,8 @@ export interface BomInput {
   connectedPorts: ReadonlySet<string>;
   parts: ReadonlyMap<string, Part>;
   rules: ShopRules;
+  /** The shop's sales tax rate in percent (from the shop profile, not the shop rules). */
+  taxRatePercent: number;
 }
 
 /**
@@ -109,7 +111,7 @@ export function billOfMaterials(input: BomInput): BillOfMaterials {
   const sortKey = (r: BomRow) => r.partId ?? `\uffff${r.description}`; // catalogue parts first, then the unlisted
   rows.sort((a, b) => KIND_ORDER.indexOf(a.kind) - KIND_ORDER.indexOf(b.kind) || (sortKey(a) < sortKey(b) ? -1 : sortKey(a) > sortKey(b) ? 1 : 0));
   const subtotalCents = rows.reduce((sum, r) => sum + (r.priceCents ?? 0), 0);
-  const taxCents = Math.round((subtotalCents * rules.taxRatePercent) / 100);
+  const taxCents = Math.round((subtotalCents * input.taxRatePercent) / 100);
   return {
     rows,
     subtotalCents,

@@ -58,7 +58,17 @@ export function buildRuleContext(doc: CircuitDocument, parts: readonly Part[], r
  * bill of materials. Never throws on a document that passed `circuitDocumentSchema`: unknown
  * part ids become flags.
  */
-export function evaluateCircuit(doc: CircuitDocument, parts: readonly Part[], shopRules: ShopRules): CircuitEvaluation {
+export interface EvaluateOptions {
+  /** The shop's sales tax rate (the shop profile owns it); 0 when omitted. */
+  taxRatePercent?: number;
+}
+
+export function evaluateCircuit(
+  doc: CircuitDocument,
+  parts: readonly Part[],
+  shopRules: ShopRules,
+  options: EvaluateOptions = {},
+): CircuitEvaluation {
   const ctx = buildRuleContext(doc, parts, shopRules);
   const flags = ruleRegistry.flatMap((rule) => rule.check(ctx)).sort(compareFlags);
   const bom = billOfMaterials({
@@ -67,6 +77,7 @@ export function evaluateCircuit(doc: CircuitDocument, parts: readonly Part[], sh
     connectedPorts: new Set(ctx.lineByPort.keys()),
     parts: ctx.parts,
     rules: shopRules,
+    taxRatePercent: options.taxRatePercent ?? 0,
   });
   return { lines: ctx.lines.map((l) => l.report), flags, bom };
 }

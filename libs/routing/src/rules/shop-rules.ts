@@ -14,7 +14,6 @@ export const shopRulesSchema = z.object({
   restrictionRatio: z.number().finite().min(0).max(1).default(0.8),
   cutRoundingIn: z.number().finite().positive().max(1).default(0.125),
   trimAllowanceIn: inchesAtLeast0.default(0.5),
-  taxRatePercent: z.number().finite().min(0).max(100).default(0),
 });
 
 export type ShopRules = z.infer<typeof shopRulesSchema>;
@@ -34,5 +33,4 @@ export const shopRuleOrigins: Readonly<Record<keyof ShopRules, string>> = {
   restrictionRatio: 'Common practice: no bore in the line smaller than 80 % of the hose inside diameter.',
   cutRoundingIn: 'Common practice: cut lengths rounded up to the next 1/8 in — cut long, never short.',
   trimAllowanceIn: 'Common practice: 1/2 in extra hose per cut for squaring the ends.',
-  taxRatePercent: 'The shop’s sales tax rate on orders; 0 until the admin sets it.',
 };
