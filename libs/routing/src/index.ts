@@ -24,6 +24,15 @@ export { portPosition } from './lines/port-position.js';
 export type { BomRow, BillOfMaterials } from './bom/bom-row.js';
 export { billOfMaterials } from './bom/bill-of-materials.js';
 export { priceOf } from './bom/price.js';
+export {
+  buildOrderSheets,
+  saleUnitLabel,
+  taxOf,
+  type OrderSheet,
+  type OrderSheetLine,
+  type OrderSheets,
+  type UnorderableRow,
+} from './bom/order-sheet.js';
 export * from './evaluate/evaluate-circuit.js';
 export { flagKey } from './rules/flag-key.js';
 export * from './compare/compare-documents.js';
