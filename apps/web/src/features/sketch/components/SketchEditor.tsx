@@ -59,6 +59,7 @@ export function SketchEditor({ store, parts, shopRules, lengthUnit, photos = [],
   const styles = useStyles();
   const doc = useEditorState(store, (s) => s.history.doc);
   const draft = useEditorState(store, (s) => s.toolDraft);
+  const view = useEditorState(store, (s) => s.view);
   const evaluation = useCircuitEvaluation(doc, parts, shopRules);
   const partsById = useMemo(() => new Map(parts.map((p) => [p.id, p])), [parts]);
   const canvasBox = useElementSize<HTMLDivElement>();
@@ -120,7 +121,16 @@ export function SketchEditor({ store, parts, shopRules, lengthUnit, photos = [],
           <OutlineList />
           <FluidLegend fluid={doc.circuit.fluid} />
         </aside>
-        <div className={styles.canvas} ref={canvasBox.ref} aria-label="Sketch canvas" role="application">
+        <div
+          className={styles.canvas}
+          ref={canvasBox.ref}
+          aria-label="Sketch canvas"
+          role="application"
+          // The view transform, for browser journeys that click sketch coordinates.
+          data-zoom={view.zoom}
+          data-pan-x={view.x}
+          data-pan-y={view.y}
+        >
           <SketchCanvas ref={canvasRef} width={width} height={height} onBackgroundSize={setPhotoSize} />
         </div>
         <div className={styles.status}>
