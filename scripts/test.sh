@@ -55,7 +55,7 @@ STEPS+=(api)
 check build-apps build_all
 if migrate_and_seed "$DATABASE_URL" && start_server "$TEST_PORT" "$DATABASE_URL" "$ROOT/artifacts/server.log"; then
   log "browser tests (playwright-core + Debian chromium) against http://127.0.0.1:$TEST_PORT"
-  (cd "$ROOT/apps/web" && BASE_URL="http://127.0.0.1:$TEST_PORT" ARTIFACTS_DIR="$ROOT/artifacts" \
+  (cd "$ROOT/apps/web" && LINESMITH_URL="http://127.0.0.1:$TEST_PORT" ARTIFACTS_DIR="$ROOT/artifacts" \
     npx vitest run -c vitest.browser.config.ts --reporter=default --reporter=json --outputFile.json="$REPORTS/browser.json")
 fi
 STEPS+=(browser)

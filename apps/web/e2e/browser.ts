@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
 
-export const baseUrl = process.env.BASE_URL ?? 'http://127.0.0.1:3000';
+export const baseUrl = process.env.LINESMITH_URL ?? 'http://127.0.0.1:3000';
 const artifactsDir = process.env.ARTIFACTS_DIR ?? join(process.cwd(), 'artifacts');
 
 export const demoPassword = 'linesmith-demo';

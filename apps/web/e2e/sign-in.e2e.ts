@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import type { BrowserContext } from 'playwright-core';
 import { demoUsers, openBrowser, screenshot, signIn } from './browser';
 
@@ -12,11 +12,12 @@ const expectedNav: Record<keyof typeof demoUsers, string[]> = {
 const allSections = ['Builds', 'Reviews', 'Orders', 'Catalogue', 'Reference', 'Admin'];
 
 describe('demo users sign in and see the navigation of their role', () => {
+  // A fresh profile per test: a signed-in session (refresh cookie) must not leak into the next.
   let context: BrowserContext;
-  beforeAll(async () => {
+  beforeEach(async () => {
     context = await openBrowser();
   });
-  afterAll(async () => {
+  afterEach(async () => {
     await context?.close();
   });
 
