@@ -68,6 +68,11 @@ export const appRoutes: RouteObject[] = [
                     lazy: () =>
                       import('../features/orders/components/OrdersPage').then((m) => ({ Component: m.OrdersPage })),
                   },
+                  {
+                    path: 'orders/:orderId',
+                    lazy: () =>
+                      import('../features/orders/components/OrderPage').then((m) => ({ Component: m.OrderPage })),
+                  },
                 ],
               },
               {
