@@ -3,6 +3,7 @@ import { ServeStaticModule } from '@nestjs/serve-static';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { LoggerModule } from 'nestjs-pino';
 import { existsSync } from 'node:fs';
+import { AuditModule } from './audit/audit.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { BuildsModule } from './builds/builds.module.js';
 import { CircuitsModule } from './circuits/circuits.module.js';
@@ -12,11 +13,15 @@ import { AppConfigService } from './config/app-config.service.js';
 import { databaseOptions } from './database/database-options.js';
 import { HealthModule } from './health/health.module.js';
 import { MailModule } from './mail/mail.module.js';
+import { OrdersModule } from './orders/orders.module.js';
+import { NotificationsModule } from './notifications/notifications.module.js';
 import { PartsModule } from './parts/parts.module.js';
 import { ReferenceModule } from './reference/reference.module.js';
+import { ReviewsModule } from './reviews/reviews.module.js';
 import { RulesModule } from './rules/rules.module.js';
 import { ShopRulesModule } from './shop-rules/shop-rules.module.js';
 import { ShopsModule } from './shops/shops.module.js';
+import { SpreadsheetsModule } from './spreadsheets/spreadsheets.module.js';
 import { StockModule } from './stock/stock.module.js';
 import { SuppliersModule } from './suppliers/suppliers.module.js';
 import { UploadsModule } from './uploads/uploads.module.js';
@@ -59,9 +64,14 @@ export class AppModule {
         RulesModule,
         BuildsModule,
         CircuitsModule,
+        AuditModule,
+        NotificationsModule,
+        ReviewsModule,
         UploadsModule,
         MailModule,
         StockModule,
+        SpreadsheetsModule,
+        OrdersModule,
       ],
     };
   }

@@ -3,7 +3,7 @@ import { ShopEntity } from '../shops/shop.entity.js';
 import { UserEntity } from '../users/user.entity.js';
 import { CircuitEntity } from './circuit.entity.js';
 
-/** A numbered, immutable snapshot of a circuit's draft (a database trigger refuses changes). */
+/** A numbered, immutable snapshot of a circuit's draft (a database trigger refuses changes; sign-off locks the rest). */
 @Entity({ name: 'circuit_revisions' })
 @Index('uq_circuit_revisions_circuit_number', ['circuitId', 'number'], { unique: true })
 @Check('ck_circuit_revisions_number', `"number" >= 1`)
@@ -47,4 +47,18 @@ export class CircuitRevisionEntity {
 
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;
+
+  /** Set on sign-off; from then on a database trigger refuses any change to the revision. */
+  @Column({ name: 'locked_at', type: 'timestamptz', nullable: true })
+  lockedAt: Date | null;
+
+  @Column({ name: 'approved_by', type: 'uuid', nullable: true })
+  approvedById: string | null;
+
+  @ManyToOne(() => UserEntity, { onDelete: 'SET NULL' })
+  @JoinColumn({ name: 'approved_by', foreignKeyConstraintName: 'fk_circuit_revisions_approved_by' })
+  approvedBy?: UserEntity | null;
+
+  @Column({ name: 'approved_at', type: 'timestamptz', nullable: true })
+  approvedAt: Date | null;
 }

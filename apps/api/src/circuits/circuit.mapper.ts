@@ -29,6 +29,9 @@ export function toRevisionSummaryDto(revision: CircuitRevisionEntity): RevisionS
     authorId: revision.authorId,
     draftVersion: revision.draftVersion,
     createdAt: revision.createdAt.toISOString(),
+    lockedAt: revision.lockedAt?.toISOString() ?? null,
+    approvedById: revision.approvedById ?? null,
+    approvedAt: revision.approvedAt?.toISOString() ?? null,
   };
 }
 

@@ -13,6 +13,10 @@ import { ShopEntity } from '../shops/shop.entity.js';
 import { SupplierEntity } from '../suppliers/supplier.entity.js';
 import { UploadEntity } from '../uploads/upload.entity.js';
 import { UserEntity } from '../users/user.entity.js';
+import { AuditEventEntity } from '../audit/audit-event.entity.js';
+import { NotificationEntity } from '../notifications/notification.entity.js';
+import { ReviewAcknowledgementEntity } from '../reviews/review-acknowledgement.entity.js';
+import { ReviewEntity } from '../reviews/review.entity.js';
 
 /** Every entity, listed explicitly (no globs) so the same list works from TS sources and from dist. */
 export const ENTITIES = [
@@ -31,4 +35,8 @@ export const ENTITIES = [
   StockAdjustmentEntity,
   OrderEntity,
   OrderLineEntity,
+  ReviewEntity,
+  ReviewAcknowledgementEntity,
+  AuditEventEntity,
+  NotificationEntity,
 ];

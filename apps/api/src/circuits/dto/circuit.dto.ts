@@ -31,6 +31,10 @@ export interface RevisionSummaryDto {
   /** The draft version the snapshot was taken from. */
   draftVersion: number;
   createdAt: string;
+  /** Set when a reviewer signed this revision off; a locked revision never changes. */
+  lockedAt: string | null;
+  approvedById: string | null;
+  approvedAt: string | null;
 }
 
 export interface RevisionDto extends RevisionSummaryDto {

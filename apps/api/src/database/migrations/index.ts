@@ -3,6 +3,7 @@ import { CreateSuppliersParts1796185836552 } from './1796185836552-create-suppli
 import { CreateShopRules1796185848071 } from './1796185848071-create-shop-rules.js';
 import { CreateBuildsCircuitsUploads1796185917823 } from './1796185917823-create-builds-circuits-uploads.js';
 import { CreateOutboxTokensStockOrders1796186373635 } from './1796186373635-create-outbox-tokens-stock-orders.js';
+import { CreateReviewsAuditNotifications1796186679267 } from './1796186679267-create-reviews-audit-notifications.js';
 
 /** Every migration in order of its timestamp; add new ones at the end. */
 export const MIGRATIONS = [
@@ -11,4 +12,5 @@ export const MIGRATIONS = [
   CreateShopRules1796185848071,
   CreateBuildsCircuitsUploads1796185917823,
   CreateOutboxTokensStockOrders1796186373635,
+  CreateReviewsAuditNotifications1796186679267,
 ];
