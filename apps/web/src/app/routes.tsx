@@ -17,6 +17,24 @@ export const appRoutes: RouteObject[] = [
     lazy: () => import('../features/auth/components/SignInPage').then((m) => ({ Component: m.SignInPage })),
   },
   {
+    path: '/accept-invite',
+    errorElement: <RouteErrorPage />,
+    hydrateFallbackElement: <PageLoading />,
+    lazy: () => import('../features/auth/components/AcceptInvitePage').then((m) => ({ Component: m.AcceptInvitePage })),
+  },
+  {
+    path: '/reset-password',
+    errorElement: <RouteErrorPage />,
+    hydrateFallbackElement: <PageLoading />,
+    lazy: () => import('../features/auth/components/ResetPasswordPage').then((m) => ({ Component: m.ResetPasswordPage })),
+  },
+  {
+    path: '/forgot-password',
+    errorElement: <RouteErrorPage />,
+    hydrateFallbackElement: <PageLoading />,
+    lazy: () => import('../features/auth/components/ForgotPasswordPage').then((m) => ({ Component: m.ForgotPasswordPage })),
+  },
+  {
     path: '/',
     element: <RequireSession />,
     errorElement: <RouteErrorPage />,
@@ -119,6 +137,11 @@ export const appRoutes: RouteObject[] = [
                           import('../features/shop-rules/components/ShopRulesPage').then((m) => ({
                             Component: m.ShopRulesPage,
                           })),
+                      },
+                      {
+                        path: 'outbox',
+                        lazy: () =>
+                          import('../features/outbox/components/OutboxPage').then((m) => ({ Component: m.OutboxPage })),
                       },
                     ],
                   },

@@ -30,6 +30,8 @@ export interface ApiClientOptions {
 export interface ApiClient {
   request<T>(path: string, options: RequestOptions<T>): Promise<T>;
   signIn(email: string, password: string): Promise<Me>;
+  /** Posts to an endpoint that answers like login (accepting an invitation) and adopts that session. */
+  signInWith(path: string, body: unknown): Promise<Me>;
   signOut(): Promise<void>;
   /** Restores the session from the refresh cookie once per page load. */
   restoreSession(): Promise<boolean>;
@@ -150,7 +152,11 @@ export function createApiClient({ fetchFn, baseUrl = '' }: ApiClientOptions = {}
   }
 
   async function signIn(email: string, password: string): Promise<Me> {
-    const response = await send('/api/auth/login', 'POST', { email, password }, null);
+    return signInWith('/api/auth/login', { email, password });
+  }
+
+  async function signInWith(path: string, body: unknown): Promise<Me> {
+    const response = await send(path, 'POST', body, null);
     if (!response.ok) throw await toApiError(response);
     const next = await parseBody(response, authSessionSchema);
     setSession({ status: 'signed-in', accessToken: next.accessToken, user: next.user });
@@ -177,6 +183,7 @@ export function createApiClient({ fetchFn, baseUrl = '' }: ApiClientOptions = {}
   return {
     request,
     signIn,
+    signInWith,
     signOut,
     restoreSession,
     getSession: () => session,

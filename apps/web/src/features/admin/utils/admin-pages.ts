@@ -2,4 +2,5 @@
 export const adminPages = [
   { to: '/admin/users', label: 'Users' },
   { to: '/admin/shop-rules', label: 'Shop rules' },
+  { to: '/admin/outbox', label: 'Outbox' },
 ] as const;

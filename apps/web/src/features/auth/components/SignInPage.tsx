@@ -1,5 +1,5 @@
 import { Card, Text, makeStyles, tokens } from '@fluentui/react-components';
-import { Navigate, useNavigate, useSearchParams } from 'react-router-dom';
+import { Link, Navigate, useNavigate, useSearchParams } from 'react-router-dom';
 import { Wordmark } from '../../shell/components/Wordmark';
 import { useSession } from '../hooks/useSession';
 import { safeReturnPath } from '../utils/safe-return-path';
@@ -41,6 +41,7 @@ export function SignInPage() {
           onSignIn={({ email, password }) => signIn(email, password)}
           onSignedIn={() => navigate(next, { replace: true })}
         />
+        <Link to="/forgot-password">Forgot password?</Link>
       </Card>
     </main>
   );

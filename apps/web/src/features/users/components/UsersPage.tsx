@@ -8,7 +8,7 @@ import {
   makeStyles,
   tokens,
 } from '@fluentui/react-components';
-import { AddRegular } from '@fluentui/react-icons';
+import { AddRegular, MailRegular } from '@fluentui/react-icons';
 import { useState } from 'react';
 import type { Role } from '../../../lib/contract/role-schema';
 import { useDebouncedValue } from '../../../lib/useDebouncedValue';
@@ -18,6 +18,7 @@ import type { User } from '../api/user-schema';
 import { useUsersList } from '../hooks/useUsersList';
 import { CreateUserDialog } from './CreateUserDialog';
 import { EditUserDialog } from './EditUserDialog';
+import { InviteUserDialog } from './InviteUserDialog';
 import { SetActiveDialog } from './SetActiveDialog';
 import { UsersTable } from './UsersTable';
 import { UsersToolbar } from './UsersToolbar';
@@ -37,6 +38,7 @@ export function UsersPage() {
   const [showInactive, setShowInactive] = useState(false);
   const [page, setPage] = useState(1);
   const [creating, setCreating] = useState(false);
+  const [inviting, setInviting] = useState(false);
   const [editing, setEditing] = useState<User | null>(null);
   const [settingActive, setSettingActive] = useState<User | null>(null);
   const debouncedSearch = useDebouncedValue(search);
@@ -52,9 +54,14 @@ export function UsersPage() {
         <Text as="h1" id="users-title" size={700} weight="semibold">
           Users and roles
         </Text>
-        <Button appearance="primary" icon={<AddRegular />} onClick={() => setCreating(true)}>
-          New user
-        </Button>
+        <div className={styles.pager}>
+          <Button icon={<MailRegular />} onClick={() => setInviting(true)}>
+            Invite user
+          </Button>
+          <Button appearance="primary" icon={<AddRegular />} onClick={() => setCreating(true)}>
+            New user
+          </Button>
+        </div>
       </div>
 
       <UsersToolbar
@@ -117,6 +124,7 @@ export function UsersPage() {
       )}
 
       <CreateUserDialog open={creating} onClose={() => setCreating(false)} />
+      {inviting && <InviteUserDialog onClose={() => setInviting(false)} />}
       {editing && <EditUserDialog key={editing.id} user={editing} onClose={() => setEditing(null)} />}
       {settingActive && (
         <SetActiveDialog key={settingActive.id} user={settingActive} onClose={() => setSettingActive(null)} />
