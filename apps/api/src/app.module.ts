@@ -13,6 +13,7 @@ import { AppConfigService } from './config/app-config.service.js';
 import { databaseOptions } from './database/database-options.js';
 import { HealthModule } from './health/health.module.js';
 import { MailModule } from './mail/mail.module.js';
+import { OrdersModule } from './orders/orders.module.js';
 import { NotificationsModule } from './notifications/notifications.module.js';
 import { PartsModule } from './parts/parts.module.js';
 import { ReferenceModule } from './reference/reference.module.js';
@@ -20,6 +21,7 @@ import { ReviewsModule } from './reviews/reviews.module.js';
 import { RulesModule } from './rules/rules.module.js';
 import { ShopRulesModule } from './shop-rules/shop-rules.module.js';
 import { ShopsModule } from './shops/shops.module.js';
+import { SpreadsheetsModule } from './spreadsheets/spreadsheets.module.js';
 import { StockModule } from './stock/stock.module.js';
 import { SuppliersModule } from './suppliers/suppliers.module.js';
 import { UploadsModule } from './uploads/uploads.module.js';
@@ -68,6 +70,8 @@ export class AppModule {
         UploadsModule,
         MailModule,
         StockModule,
+        SpreadsheetsModule,
+        OrdersModule,
       ],
     };
   }

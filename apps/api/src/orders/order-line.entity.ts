@@ -11,7 +11,7 @@ export class OrderLineEntity {
   @Column({ name: 'order_id', type: 'uuid' })
   orderId: string;
 
-  @ManyToOne(() => OrderEntity, (order) => order.lines, { onDelete: 'CASCADE' })
+  @ManyToOne(() => OrderEntity, { onDelete: 'CASCADE' })
   @JoinColumn({ name: 'order_id', foreignKeyConstraintName: 'fk_order_lines_order' })
   order?: OrderEntity;
 

@@ -1,9 +1,8 @@
-import { Column, CreateDateColumn, Entity, OneToMany, PrimaryGeneratedColumn, UpdateDateColumn, VersionColumn } from 'typeorm';
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn, VersionColumn } from 'typeorm';
 import { numericColumn } from '../database/column-transformers.js';
-import { OrderLineEntity } from './order-line.entity.js';
 import type { OrderStatus } from './order-status.js';
 
-/** One supplier's order sheet, drafted from approved circuits (checks and indexes in the migration). */
+/** One supplier's order sheet, drafted from approved circuits (checks and indexes in the migration); lines in `order_lines`. */
 @Entity({ name: 'orders' })
 export class OrderEntity {
   @PrimaryGeneratedColumn('uuid', { primaryKeyConstraintName: 'pk_orders' })
@@ -40,9 +39,6 @@ export class OrderEntity {
 
   @Column({ name: 'sent_at', type: 'timestamptz', nullable: true })
   sentAt: Date | null;
-
-  @OneToMany(() => OrderLineEntity, (line) => line.order, { cascade: ['insert'] })
-  lines?: OrderLineEntity[];
 
   @VersionColumn()
   version: number;

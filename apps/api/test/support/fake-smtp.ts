@@ -19,3 +19,28 @@ export function tokenFromMail(smtp: FakeSmtp, to: string, path: string): string 
   if (!match) throw new Error(`no ${path} link in the mail to ${to}`);
   return match[1];
 }
+
+export interface MailAttachmentPart {
+  filename: string;
+  contentType: string;
+  content: Buffer;
+}
+
+/** The base64 attachments of a raw multipart message (headers unfolded per RFC 5322 §2.2.3). */
+export function attachmentsOf(raw: string): MailAttachmentPart[] {
+  const boundary = /boundary="?([^";\r\n]+)"?/i.exec(raw)?.[1];
+  if (!boundary) return [];
+  return raw
+    .split(`--${boundary}`)
+    .flatMap((part): MailAttachmentPart[] => {
+      const [head, ...body] = part.split(/\r?\n\r?\n/);
+      const headers = head.replace(/\r?\n[ \t]+/g, ' ');
+      const filename = /Content-Disposition:\s*attachment;\s*filename="?([^"\r\n]+)"?/i.exec(headers)?.[1];
+      if (!filename) return [];
+      return [{
+        filename,
+        contentType: /Content-Type:\s*([^;\r\n]+)/i.exec(headers)?.[1].trim() ?? '',
+        content: Buffer.from(body.join('\n\n').replace(/\s+/g, ''), 'base64'),
+      }];
+    });
+}

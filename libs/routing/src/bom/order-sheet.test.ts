@@ -54,12 +54,12 @@ describe('buildOrderSheets', () => {
   });
 
   it('takes stock on hand off before rounding, never below zero, and lists what stock covers', () => {
-    // Hose: need 79.75 in = 6.646 ft, 5 ft on the shelf → 1.646 ft short → 2 ft.
-    // Clamps: need 13, 8 loose on the shelf → 5 short → 1 pack of 10.
+    // Stock is counted in sale units. Hose: need 79.75 in = 6.646 ft, 5 ft on the shelf → 1.646 ft short → 2 ft.
+    // Clamps: need 13 = 1.3 packs, 8 loose on the shelf = 0.8 packs → 0.5 short → 1 pack of 10.
     // Hose ends: need 2, 4 on the shelf → nothing to order (covered, not a negative line).
     const stock = new Map([
       [hose.id, 5],
-      [clamps.id, 8],
+      [clamps.id, 0.8],
       [end.id, 4],
     ]);
     const { sheets, coveredByStock } = buildOrderSheets(
@@ -73,6 +73,9 @@ describe('buildOrderSheets', () => {
     expect(lines.find((l) => l.partId === clamps.id)).toMatchObject({ quantity: 1 });
     expect(lines.find((l) => l.partId === end.id)).toBeUndefined();
     expect(coveredByStock).toEqual([{ partId: end.id, needed: 2, stockOnHand: 4 }]);
+    // A negative stock figure counts as none.
+    const negative = buildOrderSheets([row(end.id, 2, 'each')], parts, new Map([[end.id, -3]]), 0);
+    expect(negative.sheets[0].lines[0]).toMatchObject({ quantity: 2, stockOnHand: 0 });
   });
 
   it('groups per supplier and totals each sheet with tax at the shop rate', () => {

@@ -6,8 +6,9 @@ const INCHES_PER_FOOT = 12;
 const EPSILON = 1e-9;
 
 /**
- * One part to buy, in the supplier's sale units. `needed` and `stockOnHand` are in the part's
- * stock measure: feet for parts sold by the foot, pieces otherwise (a pack of 10 on the shelf is 10).
+ * One part to buy. `needed`, `stockOnHand` and `quantity` are all in the part's sale unit: feet,
+ * pieces or packs (stock on hand is counted the way the part is sold; 4 loose clamps from a pack
+ * of 10 are 0.4 packs).
  */
 export interface OrderSheetLine {
   partId: string;
@@ -49,16 +50,16 @@ export function saleUnitLabel(unit: SaleUnit): string {
   return unit.type === 'pack' ? `pack of ${unit.size}` : unit.type;
 }
 
-/** The BOM quantity in the part's stock measure (feet or pieces), or null when the units do not fit. */
-function neededInStockMeasure(saleUnit: SaleUnit, quantity: number, unit: BomRow['unit']): number | null {
-  if (saleUnit.type === 'foot') return unit === 'in' ? quantity / INCHES_PER_FOOT : null;
-  return unit === 'each' ? quantity : null;
-}
-
-/** Whole sale units covering `shortfall` (feet rounded up to whole feet, pieces up to whole packs). */
-function saleUnitsFor(saleUnit: SaleUnit, shortfall: number): number {
-  const units = saleUnit.type === 'pack' ? shortfall / saleUnit.size : shortfall;
-  return Math.ceil(units - EPSILON);
+/** The BOM quantity in the part's sale unit (feet, pieces or packs), or null when the units do not fit. */
+function neededInSaleUnits(saleUnit: SaleUnit, quantity: number, unit: BomRow['unit']): number | null {
+  switch (saleUnit.type) {
+    case 'foot':
+      return unit === 'in' ? quantity / INCHES_PER_FOOT : null;
+    case 'pack':
+      return unit === 'each' ? quantity / saleUnit.size : null;
+    case 'each':
+      return unit === 'each' ? quantity : null;
+  }
 }
 
 export function taxOf(subtotalCents: number, taxRatePercent: number): number {
@@ -89,7 +90,7 @@ export function buildOrderSheets(
       unorderable.push({ partId: row.partId, description: row.description, reason: 'unknown-part' });
       continue;
     }
-    const needed = neededInStockMeasure(part.saleUnit, row.quantity, row.unit);
+    const needed = neededInSaleUnits(part.saleUnit, row.quantity, row.unit);
     if (needed === null) {
       unorderable.push({ partId: part.id, description: part.description, reason: 'unit-mismatch' });
       continue;
@@ -107,7 +108,8 @@ export function buildOrderSheets(
     }
     const stockOnHand = Math.max(0, stockByPart.get(partId) ?? 0);
     const shortfall = Math.max(0, needed - stockOnHand);
-    const quantity = shortfall > EPSILON ? saleUnitsFor(part.saleUnit, shortfall) : 0;
+    // Whole sale units, rounded up: whole feet of hose, whole packs.
+    const quantity = shortfall > EPSILON ? Math.ceil(shortfall - EPSILON) : 0;
     if (quantity === 0) {
       coveredByStock.push({ partId, needed, stockOnHand });
       continue;

@@ -1,0 +1,63 @@
+import { z } from 'zod';
+import { zodDto } from '../../common/validation/zod-dto.js';
+import type { OrderStatus } from '../order-status.js';
+
+export const draftOrdersSchema = z.object({
+  circuitIds: z
+    .array(z.uuid('Give the ids of approved circuits.'))
+    .min(1, 'Choose at least one approved circuit.')
+    .max(200)
+    .transform((ids) => [...new Set(ids)]),
+});
+export class DraftOrdersDto extends zodDto(draftOrdersSchema) {}
+
+export const receiveOrderSchema = z.object({
+  lines: z
+    .array(
+      z.object({
+        orderLineId: z.uuid(),
+        /** Sale units received now (feet, pieces or packs, as ordered). */
+        quantity: z.number().finite().positive('Enter a quantity above zero.'),
+      }),
+    )
+    .min(1, 'Enter at least one received line.'),
+});
+export class ReceiveOrderDto extends zodDto(receiveOrderSchema) {}
+export type ReceiveOrderInput = z.output<typeof receiveOrderSchema>;
+
+export interface OrderLineDto {
+  id: string;
+  partId: string | null;
+  description: string;
+  supplierPartNumber: string;
+  saleUnit: string;
+  quantity: number;
+  unitPriceCents: number;
+  lineTotalCents: number;
+  receivedQuantity: number;
+}
+
+export interface OrderDto {
+  id: string;
+  supplierId: string | null;
+  supplierName: string | null;
+  status: OrderStatus;
+  circuitIds: string[];
+  taxRatePercent: number;
+  subtotalCents: number;
+  taxCents: number;
+  totalCents: number;
+  sentAt: string | null;
+  version: number;
+  createdAt: string;
+  updatedAt: string;
+  lines: OrderLineDto[];
+}
+
+export interface DraftOrdersResult {
+  orders: OrderDto[];
+  /** Parts the circuits need that stock on hand already covers. */
+  coveredByStock: Array<{ partId: string; needed: number; stockOnHand: number }>;
+  /** Bill-of-materials rows that could not be ordered (no catalogue part, retired, …). */
+  unorderable: Array<{ partId: string | null; description: string; reason: string }>;
+}

@@ -1,0 +1,252 @@
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
+import { buildOrderSheets, saleUnitLabel, type BomRow } from '@linesmith/routing';
+import { In, type DataSource, type Repository } from 'typeorm';
+import { ConflictError, NotFoundError, ValidationError } from '../common/errors/app-error.js';
+import { CircuitRevisionsService } from '../circuits/circuit-revisions.service.js';
+import { CircuitEntity } from '../circuits/circuit.entity.js';
+import { MailService } from '../mail/mail.service.js';
+import { ShopCatalogueService } from '../parts/shop-catalogue.service.js';
+import { RulesService } from '../rules/rules.service.js';
+import { ShopsService } from '../shops/shops.service.js';
+import { safeFileName, workbookBuffer, XLSX_CONTENT_TYPE } from '../spreadsheets/spreadsheet.js';
+import { StockService } from '../stock/stock.service.js';
+import { SupplierEntity } from '../suppliers/supplier.entity.js';
+import type { DraftOrdersResult, OrderDto, ReceiveOrderInput } from './dto/order.schemas.js';
+import { OrderLineEntity } from './order-line.entity.js';
+import { orderSheetWorkbook } from './order-sheet.workbook.js';
+import { OrderEntity } from './order.entity.js';
+import { toOrderDto } from './order.mapper.js';
+
+const EPSILON = 1e-9;
+
+export interface OrderFile {
+  fileName: string;
+  body: Buffer;
+}
+
+/** Order sheets per supplier, drafted from approved circuits, sent by e-mail and booked in on delivery. */
+@Injectable()
+export class OrdersService {
+  constructor(
+    @InjectRepository(OrderEntity) private readonly orders: Repository<OrderEntity>,
+    @InjectRepository(OrderLineEntity) private readonly orderLines: Repository<OrderLineEntity>,
+    @InjectRepository(CircuitEntity) private readonly circuits: Repository<CircuitEntity>,
+    @InjectRepository(SupplierEntity) private readonly suppliers: Repository<SupplierEntity>,
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly revisions: CircuitRevisionsService,
+    private readonly rules: RulesService,
+    private readonly catalogue: ShopCatalogueService,
+    private readonly shops: ShopsService,
+    private readonly stock: StockService,
+    private readonly mail: MailService,
+  ) {}
+
+  /**
+   * Sums the bills of materials of the circuits' approved revisions and writes one draft order per
+   * supplier (DOMAIN §6): whole sale units, stock on hand taken off, the shop's tax rate.
+   */
+  async draft(shopId: string, actorId: string, circuitIds: string[]): Promise<DraftOrdersResult> {
+    const circuits = await this.circuits.findBy({ shopId, id: In(circuitIds) });
+    const missing = circuitIds.filter((id) => !circuits.some((circuit) => circuit.id === id));
+    if (missing.length) throw new NotFoundError('A chosen circuit');
+    const notApproved = circuits.filter((circuit) => circuit.status !== 'approved');
+    if (notApproved.length) {
+      throw new ValidationError(
+        notApproved.map((circuit) => ({
+          path: `circuitIds.${circuitIds.indexOf(circuit.id)}`,
+          message: `“${circuit.name}” is ${circuit.status}; only approved circuits can be ordered.`,
+        })),
+        'Only approved circuits can be ordered.',
+      );
+    }
+    const bomRows: BomRow[] = [];
+    for (const circuit of circuits) {
+      const latest = (await this.revisions.list(shopId, circuit.id)).at(-1);
+      if (!latest) throw new ConflictError(`“${circuit.name}” has no revision to order from.`);
+      const { document } = await this.revisions.get(shopId, circuit.id, latest.number);
+      bomRows.push(...(await this.rules.evaluate(shopId, document)).bom.rows);
+    }
+    const [parts, shop] = await Promise.all([this.catalogue.partsOf(shopId), this.shops.getOwnShop(shopId)]);
+    const stockByPart = new Map(parts.map((part) => [part.id, part.stockOnHand]));
+    const result = buildOrderSheets(bomRows, parts, stockByPart, shop.taxRatePercent);
+
+    const saved = await this.dataSource.transaction(async (manager) => {
+      const repo = manager.getRepository(OrderEntity);
+      const ids: string[] = [];
+      for (const sheet of result.sheets) {
+        const order = await repo.save(
+          repo.create({
+            shopId,
+            supplierId: sheet.supplierId,
+            status: 'draft',
+            circuitIds: circuits.map((circuit) => circuit.id),
+            taxRatePercent: shop.taxRatePercent,
+            subtotalCents: sheet.subtotalCents,
+            taxCents: sheet.taxCents,
+            totalCents: sheet.totalCents,
+            createdBy: actorId,
+            sentAt: null,
+          }),
+        );
+        const lines = manager.getRepository(OrderLineEntity);
+        await lines.save(
+          sheet.lines.map((line, position) =>
+            lines.create({
+              orderId: order.id,
+              position,
+              partId: line.partId,
+              description: line.description,
+              supplierPartNumber: line.supplierPartNumber,
+              saleUnit: saleUnitLabel(line.saleUnit),
+              quantity: line.quantity,
+              unitPriceCents: line.unitPriceCents,
+              lineTotalCents: line.lineTotalCents,
+              receivedQuantity: 0,
+            }),
+          ),
+        );
+        ids.push(order.id);
+      }
+      return ids;
+    });
+    return {
+      orders: await Promise.all(saved.map((id) => this.get(shopId, id))),
+      coveredByStock: result.coveredByStock,
+      unorderable: result.unorderable,
+    };
+  }
+
+  async list(shopId: string): Promise<OrderDto[]> {
+    const rows = await this.orders.find({ where: { shopId }, order: { createdAt: 'DESC', id: 'ASC' }, take: 500 });
+    const lines = rows.length ? await this.orderLines.findBy({ orderId: In(rows.map((row) => row.id)) }) : [];
+    const names = await this.supplierNames(shopId);
+    return rows.map((row) =>
+      toOrderDto(
+        row,
+        lines.filter((line) => line.orderId === row.id),
+        row.supplierId ? (names.get(row.supplierId) ?? null) : null,
+      ),
+    );
+  }
+
+  async get(shopId: string, orderId: string): Promise<OrderDto> {
+    const order = await this.orders.findOneBy({ id: orderId, shopId });
+    if (!order) throw new NotFoundError('The order');
+    const [lines, supplier] = await Promise.all([
+      this.orderLines.findBy({ orderId }),
+      order.supplierId ? this.suppliers.findOneBy({ id: order.supplierId, shopId }) : null,
+    ]);
+    return toOrderDto(order, lines, supplier?.name ?? null);
+  }
+
+  async exportSheet(shopId: string, orderId: string): Promise<OrderFile> {
+    const order = await this.get(shopId, orderId);
+    const [shop, supplier] = await Promise.all([
+      this.shops.getOwnShop(shopId),
+      order.supplierId ? this.suppliers.findOneBy({ id: order.supplierId, shopId }) : null,
+    ]);
+    const dateText = new Intl.DateTimeFormat('en-CA', { timeZone: shop.timezone, dateStyle: 'short' }).format(new Date(order.createdAt));
+    const workbook = orderSheetWorkbook({
+      order,
+      shopName: shop.name,
+      supplierName: supplier?.name ?? 'no supplier on file',
+      accountNumber: supplier?.accountNumber ?? '',
+      dateText,
+    });
+    return { fileName: safeFileName(`order-${supplier?.name ?? 'no-supplier'}-${dateText}.xlsx`), body: await workbookBuffer(workbook) };
+  }
+
+  /**
+   * E-mails the order sheet to the supplier, then marks the order sent and its circuits ordered.
+   * If the mail fails nothing changes (the outbox records the attempt).
+   */
+  async send(shopId: string, orderId: string): Promise<OrderDto> {
+    const order = await this.get(shopId, orderId);
+    if (order.status !== 'draft') throw new ConflictError(`This order was already ${order.status}.`, { current: order });
+    const supplier = order.supplierId ? await this.suppliers.findOneBy({ id: order.supplierId, shopId }) : null;
+    if (!supplier?.email) {
+      throw new ValidationError([{ path: 'supplierId', message: 'The supplier has no e-mail address. Add one, or export the sheet instead.' }]);
+    }
+    const [file, shop] = await Promise.all([this.exportSheet(shopId, orderId), this.shops.getOwnShop(shopId)]);
+    await this.mail.send({
+      shopId,
+      to: supplier.email,
+      subject: `Order from ${shop.name}${supplier.accountNumber ? ` (account ${supplier.accountNumber})` : ''}`,
+      text: [
+        `Hello ${supplier.name},`,
+        '',
+        `Please supply the parts on the attached order sheet (${order.lines.length} line(s)).`,
+        supplier.accountNumber ? `Our account number: ${supplier.accountNumber}.` : '',
+        '',
+        `Thank you,`,
+        shop.name,
+      ]
+        .filter((line, index, all) => line !== '' || all[index - 1] !== '')
+        .join('\n'),
+      attachments: [{ filename: file.fileName, content: file.body, contentType: XLSX_CONTENT_TYPE }],
+    });
+    await this.dataSource.transaction(async (manager) => {
+      const result = await manager
+        .getRepository(OrderEntity)
+        .update({ id: orderId, shopId, status: 'draft', version: order.version }, { status: 'sent', sentAt: new Date() });
+      if (!result.affected) throw new ConflictError('This order was changed by someone else.');
+      await manager.getRepository(CircuitEntity).update({ shopId, id: In(order.circuitIds), status: 'approved' }, { status: 'ordered' });
+    });
+    return this.get(shopId, orderId);
+  }
+
+  /** Books delivered quantities into stock in one transaction; the order becomes partially or fully received. */
+  async receive(shopId: string, actorId: string, orderId: string, input: ReceiveOrderInput): Promise<OrderDto> {
+    await this.dataSource.transaction(async (manager) => {
+      const repo = manager.getRepository(OrderEntity);
+      const order = await repo
+        .createQueryBuilder('o')
+        .where('o.id = :orderId AND o.shop_id = :shopId', { orderId, shopId })
+        .setLock('pessimistic_write')
+        .getOne();
+      if (!order) throw new NotFoundError('The order');
+      if (order.status === 'draft' || order.status === 'received') {
+        throw new ConflictError(order.status === 'draft' ? 'Send the order before booking deliveries.' : 'This order is fully received.');
+      }
+      const lineRepo = manager.getRepository(OrderLineEntity);
+      const lines = await lineRepo.findBy({ orderId });
+      const issues: Array<{ path: string; message: string }> = [];
+      const received = new Map<string, number>();
+      input.lines.forEach((entry, index) => {
+        const line = lines.find((candidate) => candidate.id === entry.orderLineId);
+        if (!line) {
+          issues.push({ path: `lines.${index}.orderLineId`, message: 'This line is not on the order.' });
+          return;
+        }
+        const total = (received.get(line.id) ?? line.receivedQuantity) + entry.quantity;
+        if (total > line.quantity + EPSILON) {
+          issues.push({ path: `lines.${index}.quantity`, message: `Only ${line.quantity - line.receivedQuantity} ${line.saleUnit} still to come on this line.` });
+          return;
+        }
+        received.set(line.id, total);
+      });
+      if (issues.length) throw new ValidationError(issues, 'Some received quantities are not valid.');
+      for (const entry of input.lines) {
+        const line = lines.find((candidate) => candidate.id === entry.orderLineId) as OrderLineEntity;
+        if (line.partId) {
+          await this.stock.book(manager, shopId, actorId, line.partId, {
+            // Stock is counted in sale units (feet, pieces, packs), like the order line.
+            delta: entry.quantity,
+            reason: `Received on order ${orderId.slice(0, 8)}`,
+          });
+        }
+      }
+      for (const [lineId, quantity] of received) await lineRepo.update({ id: lineId }, { receivedQuantity: quantity });
+      const complete = lines.every((line) => (received.get(line.id) ?? line.receivedQuantity) >= line.quantity - EPSILON);
+      await repo.update({ id: orderId }, { status: complete ? 'received' : 'partially-received' });
+    });
+    this.catalogue.invalidate(shopId);
+    return this.get(shopId, orderId);
+  }
+
+  private async supplierNames(shopId: string): Promise<Map<string, string>> {
+    const rows = await this.suppliers.find({ where: { shopId }, select: { id: true, name: true } });
+    return new Map(rows.map((row) => [row.id, row.name]));
+  }
+}

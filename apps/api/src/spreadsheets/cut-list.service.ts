@@ -1,0 +1,76 @@
+import { Injectable } from '@nestjs/common';
+import type { CircuitDocument } from '@linesmith/routing';
+import { ConflictError } from '../common/errors/app-error.js';
+import { CircuitDraftsService } from '../circuits/circuit-drafts.service.js';
+import { CircuitRevisionsService } from '../circuits/circuit-revisions.service.js';
+import { CircuitsService } from '../circuits/circuits.service.js';
+import type { CircuitStatus } from '../circuits/circuit-status.js';
+import { ShopCatalogueService } from '../parts/shop-catalogue.service.js';
+import { RulesService } from '../rules/rules.service.js';
+import { cutListWorkbook } from './cut-list.workbook.js';
+import { safeFileName, workbookBuffer } from './spreadsheet.js';
+
+/** Statuses whose latest revision is the signed-off one. */
+const SIGNED_OFF: ReadonlySet<CircuitStatus> = new Set(['approved', 'ordered', 'installed']);
+
+export interface CutListChoice {
+  revision?: number;
+  draft: boolean;
+}
+
+export interface CutListFile {
+  fileName: string;
+  body: Buffer;
+}
+
+/** The cut list and parts of a circuit as a spreadsheet. */
+@Injectable()
+export class CutListService {
+  constructor(
+    private readonly circuits: CircuitsService,
+    private readonly drafts: CircuitDraftsService,
+    private readonly revisions: CircuitRevisionsService,
+    private readonly rules: RulesService,
+    private readonly catalogue: ShopCatalogueService,
+  ) {}
+
+  /**
+   * Of the revision asked for, the draft when `draft` is set, or else the approved revision
+   * (the latest one of a circuit that is approved, ordered or installed).
+   */
+  async export(shopId: string, circuitId: string, choice: CutListChoice): Promise<CutListFile> {
+    const circuit = await this.circuits.getOwn(shopId, circuitId);
+    const { document, basis, suffix } = await this.documentOf(shopId, circuitId, circuit.status, choice);
+    const [evaluation, catalogue] = await Promise.all([this.rules.evaluate(shopId, document), this.catalogue.partsOf(shopId)]);
+    const workbook = cutListWorkbook({
+      title: `${circuit.name}: cut list and parts`,
+      basis,
+      document,
+      evaluation,
+      parts: new Map(catalogue.map((part) => [part.id, part])),
+    });
+    return { fileName: safeFileName(`${circuit.name}-${suffix}-cut-list.xlsx`), body: await workbookBuffer(workbook) };
+  }
+
+  private async documentOf(
+    shopId: string,
+    circuitId: string,
+    status: CircuitStatus,
+    choice: CutListChoice,
+  ): Promise<{ document: CircuitDocument; basis: string; suffix: string }> {
+    if (choice.revision !== undefined) {
+      const revision = await this.revisions.get(shopId, circuitId, choice.revision);
+      return { document: revision.document, basis: `Revision ${revision.number}`, suffix: `rev${revision.number}` };
+    }
+    if (choice.draft) {
+      const draft = await this.drafts.get(shopId, circuitId);
+      return { document: draft.document, basis: 'Draft: not reviewed, do not build from it', suffix: 'draft' };
+    }
+    const latest = (await this.revisions.list(shopId, circuitId)).at(-1);
+    if (!SIGNED_OFF.has(status) || !latest) {
+      throw new ConflictError('This circuit has no approved revision yet. Export the draft instead, or a numbered revision.');
+    }
+    const revision = await this.revisions.get(shopId, circuitId, latest.number);
+    return { document: revision.document, basis: `Approved revision ${revision.number}`, suffix: `rev${revision.number}` };
+  }
+}
