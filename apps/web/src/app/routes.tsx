@@ -66,6 +66,16 @@ export const appRoutes: RouteObject[] = [
                     lazy: () =>
                       import('../features/circuits/components/CircuitPage').then((m) => ({ Component: m.CircuitPage })),
                   },
+                  {
+                    path: 'circuits/:circuitId/compare',
+                    lazy: () =>
+                      import('../features/reviews/components/ComparePage').then((m) => ({ Component: m.ComparePage })),
+                  },
+                  {
+                    path: 'circuits/:circuitId/revisions/:number/sheet',
+                    lazy: () =>
+                      import('../features/shop-sheet/components/ShopSheetPage').then((m) => ({ Component: m.ShopSheetPage })),
+                  },
                 ],
               },
               {
@@ -75,6 +85,11 @@ export const appRoutes: RouteObject[] = [
                     path: 'reviews',
                     lazy: () =>
                       import('../features/reviews/components/ReviewsPage').then((m) => ({ Component: m.ReviewsPage })),
+                  },
+                  {
+                    path: 'reviews/:circuitId',
+                    lazy: () =>
+                      import('../features/reviews/components/ReviewPage').then((m) => ({ Component: m.ReviewPage })),
                   },
                 ],
               },

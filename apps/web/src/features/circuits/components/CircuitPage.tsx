@@ -25,11 +25,16 @@ import { CircuitRatings } from './CircuitRatings';
 import { CircuitStatusBadge } from './CircuitStatusBadge';
 import { CutListTab } from './CutListTab';
 import { RevisionsTab } from './RevisionsTab';
+import { RevisionLinks } from '../../reviews/components/RevisionLinks';
+import { SubmitForReviewButton } from '../../reviews/components/SubmitForReviewButton';
 
 /** The sketch (and later its editor) is the heaviest part of the app: its own chunk. */
 const SketchTab = lazy(() => import('../../sketch/components/SketchTab').then((m) => ({ default: m.SketchTab })));
+const CircuitReviewTab = lazy(() =>
+  import('../../reviews/components/CircuitReviewTab').then((m) => ({ default: m.CircuitReviewTab })),
+);
 
-const tabs = { sketch: 'Sketch', 'cut-list': 'Cut list and parts', revisions: 'Revisions' } as const;
+const tabs = { sketch: 'Sketch', 'cut-list': 'Cut list and parts', revisions: 'Revisions', review: 'Review' } as const;
 type TabKey = keyof typeof tabs;
 const isTab = (value: string | null): value is TabKey => value !== null && value in tabs;
 
@@ -78,6 +83,7 @@ export function CircuitPage() {
           {c.name}
         </Text>
         <CircuitStatusBadge status={c.status} />
+        <SubmitForReviewButton circuit={c} />
       </div>
       <Text className={styles.facts}>
         <span>Kind: {circuitKinds[c.kind].label}</span>
@@ -109,7 +115,13 @@ export function CircuitPage() {
           </Suspense>
         )}
         {tab === 'cut-list' && <CutListTab circuitId={c.id} />}
+        {tab === 'revisions' && <RevisionLinks circuitId={c.id} />}
         {tab === 'revisions' && <RevisionsTab circuitId={c.id} />}
+        {tab === 'review' && (
+          <Suspense fallback={<Spinner label="Loading the review…" />}>
+            <CircuitReviewTab circuitId={c.id} />
+          </Suspense>
+        )}
       </div>
     </article>
   );

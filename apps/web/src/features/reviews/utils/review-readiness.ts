@@ -1,0 +1,35 @@
+import { flagKey, type Flag } from '@linesmith/routing';
+import type { Acknowledgement } from '../api/review-schemas';
+
+export interface CautionState {
+  key: string;
+  flag: Flag;
+  acknowledgement: Acknowledgement | null;
+}
+
+export interface ReviewReadiness {
+  blockers: Flag[];
+  cautions: CautionState[];
+  notes: Flag[];
+  openCautions: number;
+  /** Approval needs no blocker and every caution acknowledged (DOMAIN §5; the server checks it too). */
+  canApprove: boolean;
+}
+
+/** What stands between a submitted revision and its sign-off. */
+export function reviewReadiness(flags: readonly Flag[], acknowledgements: readonly Acknowledgement[]): ReviewReadiness {
+  const byKey = new Map(acknowledgements.map((a) => [a.flagKey, a]));
+  const blockers = flags.filter((f) => f.severity === 'blocker');
+  const notes = flags.filter((f) => f.severity === 'note');
+  const seen = new Set<string>();
+  const cautions: CautionState[] = [];
+  for (const flag of flags) {
+    if (flag.severity !== 'caution') continue;
+    const key = flagKey(flag);
+    if (seen.has(key)) continue; // one acknowledgement answers every flag of the same key
+    seen.add(key);
+    cautions.push({ key, flag, acknowledgement: byKey.get(key) ?? null });
+  }
+  const openCautions = cautions.filter((c) => c.acknowledgement === null).length;
+  return { blockers, cautions, notes, openCautions, canApprove: blockers.length === 0 && openCautions === 0 };
+}
