@@ -1,4 +1,4 @@
-import { Checkbox, Field, Input, Select, makeStyles, tokens } from '@fluentui/react-components';
+import { Checkbox, Field, Input, Select, Text, makeStyles, tokens } from '@fluentui/react-components';
 import type { PartKind } from '@linesmith/catalog';
 import type { AttributeValues } from '../utils/attribute-values';
 import { attributeFields, type AttributeField } from '../utils/part-attribute-fields';
@@ -15,6 +15,8 @@ const useStyles = makeStyles({
   grid: { display: 'grid', gridTemplateColumns: 'repeat(2, minmax(0, 1fr))', gap: tokens.spacingVerticalM },
   wide: { gridColumn: '1 / -1' },
   choices: { display: 'flex', flexWrap: 'wrap', columnGap: tokens.spacingHorizontalM },
+  fieldset: { border: 'none', margin: 0, padding: 0 },
+  error: { color: tokens.colorPaletteRedForeground1 },
 });
 
 const angles = [0, 45, 90, 120, 150, 180];
@@ -75,9 +77,13 @@ export function AttributeFieldsEditor({ kind, values, errors, onChange }: Attrib
         );
       case 'multi-choice': {
         const selected = list(field.key);
+        // A fieldset, not a Field: a Field would name every checkbox after the group's label.
         return (
-          <Field key={field.key} className={styles.wide} label={label} required validationMessage={errors[field.key]}>
-            <div className={styles.choices} role="group" aria-label={label}>
+          <fieldset key={field.key} className={`${styles.wide} ${styles.fieldset}`}>
+            <legend>
+              {label} <span aria-hidden="true">*</span>
+            </legend>
+            <div className={styles.choices}>
               {field.options.map((o) => (
                 <Checkbox
                   key={o.value}
@@ -89,7 +95,12 @@ export function AttributeFieldsEditor({ kind, values, errors, onChange }: Attrib
                 />
               ))}
             </div>
-          </Field>
+            {errors[field.key] && (
+              <Text role="alert" size={200} className={styles.error}>
+                {errors[field.key]}
+              </Text>
+            )}
+          </fieldset>
         );
       }
       case 'connection':

@@ -11,7 +11,7 @@ import {
 } from '@fluentui/react-components';
 import { ArrowUploadRegular } from '@fluentui/react-icons';
 import { useQueryClient } from '@tanstack/react-query';
-import { useState, type ChangeEvent } from 'react';
+import { useId, useState, type ChangeEvent } from 'react';
 import { ApiError } from '../../../lib/api-error';
 import { describeError } from '../../../lib/describe-error';
 import { useApiClient } from '../../../lib/useApiClient';
@@ -64,6 +64,7 @@ export function PriceListImport({ suppliers }: PriceListImportProps) {
   const [progress, setProgress] = useState<number | null>(null);
   const [error, setError] = useState<string | null>(null);
   const busy = progress !== null;
+  const fileInputId = useId();
 
   function chooseFile(event: ChangeEvent<HTMLInputElement>) {
     const chosen = event.target.files?.[0] ?? null;
@@ -138,8 +139,8 @@ export function PriceListImport({ suppliers }: PriceListImportProps) {
             ))}
           </Select>
         </Field>
-        <Field label="Price list file" required validationMessage={fileError}>
-          <input type="file" accept=".xlsx,.csv,application/vnd.openxmlformats-officedocument.spreadsheetml.sheet,text/csv" onChange={chooseFile} disabled={busy} />
+        <Field label={{ children: 'Price list file', htmlFor: fileInputId }} required validationMessage={fileError}>
+          <input id={fileInputId} type="file" accept=".xlsx,.csv,application/vnd.openxmlformats-officedocument.spreadsheetml.sheet,text/csv" onChange={chooseFile} disabled={busy} />
         </Field>
         <Button icon={<ArrowUploadRegular />} disabled={!file || !supplierId || fileError !== null || busy} onClick={() => void readFile()}>
           Read columns

@@ -138,11 +138,13 @@ function keyForPath(kind: PartKind, path: string): string | undefined {
   );
 }
 
-function labelOf(kind: PartKind, key: string): string {
+/** "Enter the max working pressure." for typed fields, "Choose the liner." for picked ones. */
+function blankMessage(kind: PartKind, key: string): string {
   const field = attributeFields[kind].find((f) => key === f.key || key.startsWith(`${f.key}.`));
-  if (!field) return key;
-  if (field.type === 'connection') return `${field.label} ${key.split('.').at(-1)}`;
-  return field.label;
+  if (!field) return `Enter ${key}.`;
+  if (field.type === 'connection') return `Choose the ${key.split('.').at(-1)} of ${field.label.toLowerCase()}.`;
+  const verb = field.type === 'number' || field.type === 'text' || field.type === 'text-list' ? 'Enter' : 'Choose';
+  return `${verb} the ${field.label.toLowerCase()}.`;
 }
 
 /** Validates with the catalogue library's schema for the kind; messages keyed by editor key. */
@@ -153,7 +155,7 @@ export function checkAttributes(kind: PartKind, values: AttributeValues): Attrib
   for (const issue of result.error.issues) {
     const key = keyForPath(kind, issue.path.map(String).join('.'));
     if (!key || errors[key] !== undefined) continue;
-    errors[key] = isBlank(values, key) ? `Enter the ${labelOf(kind, key).toLowerCase()}.` : issue.message;
+    errors[key] = isBlank(values, key) ? blankMessage(kind, key) : issue.message;
   }
   return { ok: false, errors };
 }

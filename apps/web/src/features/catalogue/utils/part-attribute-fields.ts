@@ -34,7 +34,7 @@ export const attributeFields: Record<PartKind, AttributeField[]> = {
     { type: 'number', key: 'maxPressurePsi', label: 'Max working pressure', unit: 'psi' },
     { type: 'number', key: 'maxTempF', label: 'Max temperature', unit: '°F' },
     { type: 'number', key: 'minBendRadiusIn', label: 'Min bend radius', unit: 'in' },
-    { type: 'multi-choice', key: 'fluids', label: 'Rated for fluids', options: fluids },
+    { type: 'multi-choice', key: 'fluids', label: 'Fluids it is rated for', options: fluids },
   ],
   'hose-end': [
     { type: 'number', key: 'hoseDash', label: 'Hose dash size' },
