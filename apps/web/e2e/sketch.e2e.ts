@@ -20,6 +20,8 @@ async function openTransmissionCooler(page: Page): Promise<Locator> {
   await page.getByRole('link', { name: 'Transmission cooler' }).first().click();
   const canvas = page.getByRole('application', { name: 'Sketch canvas' });
   await canvas.waitFor();
+  // The canvas sits under the circuit's header: bring all of it on screen before clicking on it.
+  await canvas.evaluate((el) => el.scrollIntoView({ block: 'center' }));
   return canvas;
 }
 
@@ -43,7 +45,15 @@ describe('sketching the transmission-cooler circuit', () => {
     await signIn(page, demoUsers.fabricator);
     await page.getByRole('navigation').first().waitFor();
     let canvas = await openTransmissionCooler(page);
+    // A draft left by an earlier run keeps its lines: clear them so both ports are free again.
+    const outline = page.getByRole('listbox', { name: 'Sketch items' });
+    await outline.waitFor();
+    while ((await outline.getByRole('option', { name: /^Line \d+:/ }).count()) > 0) {
+      await outline.getByRole('option', { name: /^Line \d+:/ }).first().click();
+      await page.getByRole('button', { name: 'Delete line' }).click();
+    }
     await page.keyboard.press('f');
+    await canvas.evaluate((el) => el.scrollIntoView({ block: 'center' }));
 
     // Calibrate: two points 200 sketch px apart are 10 in → 20 px per inch.
     await page.keyboard.press('c');
@@ -69,7 +79,7 @@ describe('sketching the transmission-cooler circuit', () => {
     expect(await inspector.getByRole('region', { name: 'Corners' }).getByRole('listitem').count()).toBe(2);
 
     // Hose rated for ATF at the circuit's pressure and heat, then an end stack per end from the suggestions.
-    await inspector.getByRole('combobox', { name: 'Hose' }).selectOption({ label: '-6 CPE-lined braided rubber hose' });
+    await inspector.getByRole('combobox', { name: 'Hose', exact: true }).selectOption({ label: '-6 CPE-lined braided rubber hose' });
     const fromSuggestions = inspector.getByRole('list', { name: /Suggestions for Four-speed automatic/ });
     await fromSuggestions.getByRole('button', { name: /long-nose/ }).first().click();
     const toSuggestions = inspector.getByRole('list', { name: /Suggestions for Transmission cooler/ });
@@ -79,7 +89,7 @@ describe('sketching the transmission-cooler circuit', () => {
     const cutRow = inspector.getByRole('row', { name: /Cut length \(rounded up\)/ });
     await expect.poll(async () => (await cutRow.textContent()) ?? '').toMatch(/\d+(-\d+\/\d+)?"/);
     const cut = (await cutRow.textContent())!.replace('Cut length (rounded up)', '').trim();
-    await page.getByRole('status', { name: 'Save state' }).getByText('Saved').waitFor({ timeout: 15_000 });
+    await page.getByRole('status', { name: 'Save state' }).getByText('✓ Saved', { exact: true }).waitFor({ timeout: 15_000 });
     await screenshot(page, 'sketch-transmission-cooler');
 
     // Reload: the line, its parts and its cut length come back from the saved draft.

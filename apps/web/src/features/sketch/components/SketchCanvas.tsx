@@ -25,7 +25,8 @@ import { BackgroundImage } from './BackgroundImage';
 import { CornerHandle } from './shapes/CornerHandle';
 import { FlagMarker } from './shapes/FlagMarker';
 import { HeatZoneShape } from './shapes/HeatZoneShape';
-import { LineShape } from './shapes/LineShape';
+import { DimensionLabel } from './shapes/DimensionLabel';
+import { LineShape, labelPosition } from './shapes/LineShape';
 import { UnitShape } from './shapes/UnitShape';
 
 export interface SketchCanvasProps {
@@ -293,7 +294,6 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
             fluid={style}
             zoom={zoom}
             selected={selectedLineIds.has(line.id)}
-            label={cutLengthLabel(reports.get(line.id), lengthUnit)}
             onSelect={(e) => choose({ kind: 'line', id: line.id }, e)}
             onDoubleClick={(p) => {
               const route = routePx(doc, line);
@@ -350,6 +350,21 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
           )}
       </Layer>
       <Layer>
+        {doc.lines.map((line) => {
+          const route = routePx(doc, line);
+          if (!route) return null;
+          const at = labelPosition(route);
+          return (
+            <DimensionLabel
+              key={line.id}
+              x={at.x + 6 / zoom}
+              y={at.y + 6 / zoom}
+              text={cutLengthLabel(reports.get(line.id), lengthUnit)}
+              style={style}
+              zoom={zoom}
+            />
+          );
+        })}
         {evaluation.flags.map((flag, i) => {
           const at = flagPosition(doc, flag);
           if (!at) return null;

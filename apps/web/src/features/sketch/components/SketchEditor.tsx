@@ -48,10 +48,15 @@ const useStyles = makeStyles({
     background: tokens.colorNeutralBackground1,
   },
   tools: { gridArea: 'tools', borderBottom: `1px solid ${tokens.colorNeutralStroke2}`, padding: tokens.spacingVerticalXXS },
-  left: { gridArea: 'left', overflowY: 'auto', padding: tokens.spacingVerticalS, display: 'grid', alignContent: 'start', gap: tokens.spacingVerticalM, borderRight: `1px solid ${tokens.colorNeutralStroke2}` },
+  left: { gridArea: 'left', minWidth: 0, overflowWrap: 'anywhere', overflowY: 'auto', padding: tokens.spacingVerticalS, display: 'grid', alignContent: 'start', gap: tokens.spacingVerticalM, borderRight: `1px solid ${tokens.colorNeutralStroke2}` },
   canvas: { gridArea: 'canvas', position: 'relative', overflow: 'hidden', background: '#fafaf9' },
   status: { gridArea: 'status' },
-  right: { gridArea: 'right', overflowY: 'auto', padding: tokens.spacingVerticalS, display: 'grid', alignContent: 'start', gap: tokens.spacingVerticalM, borderLeft: `1px solid ${tokens.colorNeutralStroke2}` },
+  right: {
+    // Native selects size to their longest option; keep the long part names inside the panel.
+    '& .fui-Select, & select, & input': { maxWidth: '100%', minWidth: 0 },
+    gridTemplateColumns: 'minmax(0, 1fr)',
+    gridArea: 'right',
+    minWidth: 0, overflowX: 'hidden', overflowWrap: 'anywhere', overflowY: 'auto', padding: tokens.spacingVerticalS, display: 'grid', alignContent: 'start', gap: tokens.spacingVerticalM, borderLeft: `1px solid ${tokens.colorNeutralStroke2}` },
 });
 
 /** The circuit sketch editor: palette and outline, canvas, inspector and flags, all over one store. */

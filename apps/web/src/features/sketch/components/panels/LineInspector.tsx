@@ -24,7 +24,7 @@ export interface LineInspectorProps {
 }
 
 const useStyles = makeStyles({
-  stack: { display: 'grid', gap: tokens.spacingVerticalS },
+  stack: { display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)', gap: tokens.spacingVerticalS },
   list: { margin: 0, paddingLeft: tokens.spacingHorizontalL, fontSize: tokens.fontSizeBase200 },
   row: { display: 'flex', gap: tokens.spacingHorizontalXS, alignItems: 'center' },
   error: { color: tokens.colorPaletteRedForeground1 },

@@ -13,7 +13,7 @@ export interface UnitInspectorProps {
   highlightedPortId: string | null;
 }
 
-const useStyles = makeStyles({ stack: { display: 'grid', gap: tokens.spacingVerticalS } });
+const useStyles = makeStyles({ stack: { display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)', gap: tokens.spacingVerticalS } });
 
 export function UnitInspector({ unit, highlightedPortId }: UnitInspectorProps) {
   const styles = useStyles();

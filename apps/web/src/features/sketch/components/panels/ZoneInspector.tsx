@@ -7,7 +7,7 @@ import { updateHeatZone } from '../../model/commands/update-heat-zone';
 import { CommitInput } from './CommitInput';
 import { lengthFieldText, parseLength } from './length-input';
 
-const useStyles = makeStyles({ stack: { display: 'grid', gap: tokens.spacingVerticalS } });
+const useStyles = makeStyles({ stack: { display: 'grid', gridTemplateColumns: 'minmax(0, 1fr)', gap: tokens.spacingVerticalS } });
 
 export function ZoneInspector({ zone }: { zone: HeatZone }) {
   const styles = useStyles();

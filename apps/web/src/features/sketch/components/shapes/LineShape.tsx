@@ -17,7 +17,8 @@ export interface LineShapeProps {
   fluid: FluidStyle;
   selected: boolean;
   zoom: number;
-  label: string;
+  /** Draws the cut-length label with the line; the editor leaves it out and draws labels above the units. */
+  label?: string;
   onSelect(event: KonvaEventObject<MouseEvent>): void;
   onDoubleClick(point: Point): void;
 }
@@ -33,15 +34,21 @@ function stretchPoints(geometry: LinePathIn, startIn: number, endIn: number, pxP
   return flat;
 }
 
-/** A line: its route with bends in the fluid-class colour, sleeves, supports and the cut-length label. */
+/** Where a line's cut-length label sits: the middle of its middle leg. */
+export function labelPosition(route: readonly Point[]): Point {
+  const mid = Math.floor((route.length - 1) / 2);
+  const a = route[mid];
+  const b = route[mid + 1] ?? a;
+  return { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 };
+}
+
+/** A line: its route with bends in the fluid-class colour, sleeves and supports (its label is drawn on top, see DimensionLabel). */
 export function LineShape({ doc, line, report, pxPerIn, fluid, selected, zoom, label, onSelect, onDoubleClick }: LineShapeProps) {
   const route = routePx(doc, line);
   if (!route) return null;
   const basisIn = report?.measuredLengthIn ?? null;
   const geometry = pxPerIn ? linePathIn(doc, line, pxPerIn, basisIn) : null;
   const points = geometry && pxPerIn && report?.fits !== false ? pathPoints(geometry, pxPerIn) : route.flatMap((p) => [p.x, p.y]);
-  const mid = Math.floor((route.length - 1) / 2);
-  const labelAt = { x: (route[mid].x + route[mid + 1].x) / 2, y: (route[mid].y + route[mid + 1].y) / 2 };
   return (
     <Group name="line">
       {geometry &&
@@ -80,7 +87,7 @@ export function LineShape({ doc, line, report, pxPerIn, fluid, selected, zoom, l
             </Fragment>
           );
         })}
-      <DimensionLabel x={labelAt.x + 6 / zoom} y={labelAt.y + 6 / zoom} text={label} style={fluid} zoom={zoom} />
+      {label && <DimensionLabel x={labelPosition(route).x + 6 / zoom} y={labelPosition(route).y + 6 / zoom} text={label} style={fluid} zoom={zoom} />}
     </Group>
   );
 }
