@@ -16,6 +16,7 @@ import { MailModule } from './mail/mail.module.js';
 import { OrdersModule } from './orders/orders.module.js';
 import { NotificationsModule } from './notifications/notifications.module.js';
 import { PartsModule } from './parts/parts.module.js';
+import { PriceListsModule } from './price-lists/price-lists.module.js';
 import { ReferenceModule } from './reference/reference.module.js';
 import { ReviewsModule } from './reviews/reviews.module.js';
 import { RulesModule } from './rules/rules.module.js';
@@ -72,6 +73,7 @@ export class AppModule {
         StockModule,
         SpreadsheetsModule,
         OrdersModule,
+        PriceListsModule,
       ],
     };
   }
