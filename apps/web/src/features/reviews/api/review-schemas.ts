@@ -6,13 +6,17 @@ import { evaluationSchema } from './evaluation-schema';
 const isoTime = z.iso.datetime({ offset: true });
 export const personSchema = z.object({ id: z.string().min(1), displayName: z.string() });
 export type Person = z.infer<typeof personSchema>;
+/** A user the server names; null where the account is gone. */
+const someone = personSchema.nullable();
+/** How a person is shown when the account is gone. */
+export const personName = (person: Person | null) => person?.displayName ?? 'a former user';
 
 /** One row of `GET /api/reviews`. */
 export const reviewQueueRowSchema = z.object({
   circuitId: z.string().min(1),
   circuitName: z.string(),
   build: z.object({ id: z.string().min(1), label: z.string() }),
-  fabricator: personSchema,
+  fabricator: someone,
   revisionNumber: z.number().int().positive(),
   submittedAt: isoTime,
   blockers: z.number().int().nonnegative(),
@@ -24,7 +28,7 @@ export const reviewQueueSchema = z.array(reviewQueueRowSchema);
 export const acknowledgementSchema = z.object({
   flagKey: z.string().min(1),
   note: z.string(),
-  by: personSchema,
+  by: someone,
   at: isoTime,
 });
 export type Acknowledgement = z.infer<typeof acknowledgementSchema>;
@@ -33,7 +37,7 @@ export type Acknowledgement = z.infer<typeof acknowledgementSchema>;
 export const decisionSchema = z
   .object({
     kind: z.enum(['approved', 'returned']),
-    by: personSchema,
+    by: someone,
     at: isoTime,
     note: z.string().nullish(),
     comments: z.string().nullish(),
@@ -56,7 +60,7 @@ export type CircuitReview = z.infer<typeof circuitReviewSchema>;
 /** `GET /api/circuits/:id/audit`, oldest first or newest first as the server keeps it. */
 export const auditEntrySchema = z.object({
   action: z.string().min(1),
-  actor: personSchema.nullable(),
+  actor: someone,
   revisionNumber: z.number().int().positive().nullable(),
   details: z.unknown(),
   at: isoTime,

@@ -1,6 +1,6 @@
 import { MessageBar, MessageBarBody, MessageBarTitle } from '@fluentui/react-components';
 import { formatDateTime } from '../../users/utils/format-date-time';
-import type { CircuitReview } from '../api/review-schemas';
+import { personName, type CircuitReview } from '../api/review-schemas';
 
 export interface DecisionBannerProps {
   review: CircuitReview;
@@ -26,7 +26,7 @@ export function DecisionBanner({ review }: DecisionBannerProps) {
         <MessageBarTitle>
           {approved ? `Revision ${revisionNumber} approved and locked` : `Revision ${revisionNumber} returned to the fabricator`}
         </MessageBarTitle>
-        by {decision.by.displayName}, {formatDateTime(decision.at)}
+        by {personName(decision.by)}, {formatDateTime(decision.at)}
         {decision.text && <> — “{decision.text}”</>}
       </MessageBarBody>
     </MessageBar>

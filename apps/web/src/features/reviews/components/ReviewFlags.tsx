@@ -2,6 +2,7 @@ import { Card, Text, makeStyles, tokens } from '@fluentui/react-components';
 import type { CircuitDocument, Flag } from '@linesmith/routing';
 import { SeverityLabel } from '../../reference/components/SeverityLabel';
 import { formatDateTime } from '../../users/utils/format-date-time';
+import { personName } from '../api/review-schemas';
 import { flagPlace } from '../utils/flag-place';
 import type { ReviewReadiness } from '../utils/review-readiness';
 import { AcknowledgeForm } from './AcknowledgeForm';
@@ -81,7 +82,7 @@ export function ReviewFlags({ circuitId, document, readiness, canAcknowledge }: 
                   <FlagText document={document} flag={flag} />
                   {acknowledgement ? (
                     <div className={styles.ack}>
-                      <SeverityLabel level="ok" text={`Acknowledged by ${acknowledgement.by.displayName}, ${formatDateTime(acknowledgement.at)}`} />
+                      <SeverityLabel level="ok" text={`Acknowledged by ${personName(acknowledgement.by)}, ${formatDateTime(acknowledgement.at)}`} />
                       <Text block>“{acknowledgement.note}”</Text>
                     </div>
                   ) : canAcknowledge ? (

@@ -2,7 +2,7 @@ import { Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, To
 import { Link, useNavigate } from 'react-router-dom';
 import { SeverityLabel } from '../../reference/components/SeverityLabel';
 import { formatDateTime } from '../../users/utils/format-date-time';
-import type { ReviewQueueRow } from '../api/review-schemas';
+import { personName, type ReviewQueueRow } from '../api/review-schemas';
 import { relativeTime } from '../utils/relative-time';
 import { reviewPath } from '../utils/review-paths';
 
@@ -41,7 +41,7 @@ export function ReviewQueueTable({ rows }: ReviewQueueTableProps) {
                 {row.circuitName}
               </Link>
             </TableCell>
-            <TableCell>{row.fabricator.displayName}</TableCell>
+            <TableCell>{personName(row.fabricator)}</TableCell>
             <TableCell>{row.revisionNumber}</TableCell>
             <TableCell>
               <Tooltip content={formatDateTime(row.submittedAt)} relationship="description">
