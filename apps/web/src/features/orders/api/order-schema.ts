@@ -36,6 +36,7 @@ export const orderSchema = z.looseObject({
   id: z.string().min(1),
   supplierId: z.string().nullish().transform((v) => v ?? null),
   supplier: supplierRefSchema.nullish().transform((v) => v ?? null),
+  supplierName: z.string().nullish().transform((v) => v ?? null),
   status: orderStatusSchema,
   circuitIds: z.array(z.string()).default([]),
   taxRatePercent: z.number().default(0),

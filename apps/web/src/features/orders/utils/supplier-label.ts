@@ -6,5 +6,6 @@ export function supplierOf(order: Order, suppliers: readonly Supplier[]): { name
   const known = order.supplierId ? suppliers.find((s) => s.id === order.supplierId) : undefined;
   if (order.supplier) return { name: order.supplier.name, email: order.supplier.email ?? known?.email ?? '' };
   if (known) return { name: known.name, email: known.email };
+  if (order.supplierName) return { name: order.supplierName, email: '' };
   return { name: order.supplierId ? 'Unknown supplier' : 'No supplier yet', email: '' };
 }
