@@ -1,4 +1,5 @@
 import ExcelJS from 'exceljs';
+import { AuditEventEntity } from '../src/audit/audit-event.entity.js';
 import { CircuitEntity } from '../src/circuits/circuit.entity.js';
 import { decodeQuotedPrintable, type FakeSmtp } from '../src/mail/fake-smtp-server.js';
 import { OutboxEntity } from '../src/mail/outbox.entity.js';
@@ -212,6 +213,8 @@ describe('cut-list spreadsheets and orders (e2e)', () => {
       expect(outbox).toMatchObject({ status: 'sent', attachmentNames: [attachment.filename] });
       const circuits = await testApp.dataSource.getRepository(CircuitEntity).findBy({ buildId });
       expect(circuits.filter((circuit) => circuit.id !== draftCircuit.id).map((circuit) => circuit.status)).toEqual(['ordered', 'ordered']);
+      const trail = await testApp.dataSource.getRepository(AuditEventEntity).findBy({ circuitId: circuitA.id, action: 'order' });
+      expect(trail).toEqual([expect.objectContaining({ revisionNumber: 1, details: expect.objectContaining({ orderId: order.id }) })]);
       await testApp.http().post(`/api/orders/${order.id}/send`).set(as(clerkToken)).expect(409);
     });
 

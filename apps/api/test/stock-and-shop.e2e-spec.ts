@@ -51,6 +51,7 @@ describe('stock adjustments and the shop profile (e2e)', () => {
     expect(await testApp.dataSource.getRepository(StockAdjustmentEntity).countBy({ partId })).toBe(2);
     const history = await testApp.http().get(`/api/parts/${partId}/stock-adjustments`).set(as(fabToken)).expect(200);
     expect(history.body.map((row: { delta: number }) => row.delta).sort()).toEqual([-20.5, 120].sort());
+    expect(history.body[0].actor).toMatchObject({ displayName: expect.stringContaining('parts-clerk') });
     // The part list sees the new stock at once (the cached catalogue was dropped).
     const listed = await testApp.http().get('/api/parts?kind=hose&pageSize=200').set(as(clerkToken)).expect(200);
     expect(listed.body.items.find((p: { id: string }) => p.id === partId).stockOnHand).toBeCloseTo(part.stockOnHand, 6);

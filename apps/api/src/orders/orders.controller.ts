@@ -40,7 +40,7 @@ export class OrdersController {
   @Post(':id/send')
   @HttpCode(200)
   send(@CurrentUser() caller: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<OrderDto> {
-    return this.orders.send(caller.shopId, id);
+    return this.orders.send(caller.shopId, caller.userId, id);
   }
 
   @Post(':id/receive')

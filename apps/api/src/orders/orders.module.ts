@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { AuditModule } from '../audit/audit.module.js';
 import { CircuitEntity } from '../circuits/circuit.entity.js';
 import { CircuitsModule } from '../circuits/circuits.module.js';
 import { MailModule } from '../mail/mail.module.js';
@@ -22,6 +23,7 @@ import { OrdersService } from './orders.service.js';
     ShopsModule,
     StockModule,
     MailModule,
+    AuditModule,
   ],
   controllers: [OrdersController],
   providers: [OrdersService],

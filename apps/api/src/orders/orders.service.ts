@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { buildOrderSheets, saleUnitLabel, type BomRow } from '@linesmith/routing';
 import { In, type DataSource, type Repository } from 'typeorm';
+import { AuditService } from '../audit/audit.service.js';
 import { ConflictError, NotFoundError, ValidationError } from '../common/errors/app-error.js';
 import { CircuitRevisionsService } from '../circuits/circuit-revisions.service.js';
 import { CircuitEntity } from '../circuits/circuit.entity.js';
@@ -9,6 +10,7 @@ import { MailService } from '../mail/mail.service.js';
 import { ShopCatalogueService } from '../parts/shop-catalogue.service.js';
 import { RulesService } from '../rules/rules.service.js';
 import { ShopsService } from '../shops/shops.service.js';
+import { approvedRevisionNumber } from '../spreadsheets/approved-revision.js';
 import { safeFileName, workbookBuffer, XLSX_CONTENT_TYPE } from '../spreadsheets/spreadsheet.js';
 import { StockService } from '../stock/stock.service.js';
 import { SupplierEntity } from '../suppliers/supplier.entity.js';
@@ -40,6 +42,7 @@ export class OrdersService {
     private readonly shops: ShopsService,
     private readonly stock: StockService,
     private readonly mail: MailService,
+    private readonly audit: AuditService,
   ) {}
 
   /**
@@ -62,9 +65,9 @@ export class OrdersService {
     }
     const bomRows: BomRow[] = [];
     for (const circuit of circuits) {
-      const latest = (await this.revisions.list(shopId, circuit.id)).at(-1);
-      if (!latest) throw new ConflictError(`“${circuit.name}” has no revision to order from.`);
-      const { document } = await this.revisions.get(shopId, circuit.id, latest.number);
+      const approved = approvedRevisionNumber(await this.revisions.list(shopId, circuit.id));
+      if (approved === undefined) throw new ConflictError(`“${circuit.name}” has no signed-off revision to order from.`);
+      const { document } = await this.revisions.get(shopId, circuit.id, approved);
       bomRows.push(...(await this.rules.evaluate(shopId, document)).bom.rows);
     }
     const [parts, shop] = await Promise.all([this.catalogue.partsOf(shopId), this.shops.getOwnShop(shopId)]);
@@ -158,10 +161,11 @@ export class OrdersService {
   }
 
   /**
-   * E-mails the order sheet to the supplier, then marks the order sent and its circuits ordered.
+   * E-mails the order sheet to the supplier, then marks the order sent and its circuits ordered
+   * (with an `order` event in each circuit's audit trail).
    * If the mail fails nothing changes (the outbox records the attempt).
    */
-  async send(shopId: string, orderId: string): Promise<OrderDto> {
+  async send(shopId: string, actorId: string, orderId: string): Promise<OrderDto> {
     const order = await this.get(shopId, orderId);
     if (order.status !== 'draft') throw new ConflictError(`This order was already ${order.status}.`, { current: order });
     const supplier = order.supplierId ? await this.suppliers.findOneBy({ id: order.supplierId, shopId }) : null;
@@ -191,7 +195,20 @@ export class OrdersService {
         .getRepository(OrderEntity)
         .update({ id: orderId, shopId, status: 'draft', version: order.version }, { status: 'sent', sentAt: new Date() });
       if (!result.affected) throw new ConflictError('This order was changed by someone else.');
-      await manager.getRepository(CircuitEntity).update({ shopId, id: In(order.circuitIds), status: 'approved' }, { status: 'ordered' });
+      const circuits = manager.getRepository(CircuitEntity);
+      const stillApproved = await circuits.findBy({ shopId, id: In(order.circuitIds), status: 'approved' });
+      if (!stillApproved.length) return;
+      await circuits.update({ shopId, id: In(stillApproved.map((circuit) => circuit.id)) }, { status: 'ordered' });
+      for (const circuit of stillApproved) {
+        await this.audit.record(manager, {
+          shopId,
+          circuitId: circuit.id,
+          actorId,
+          action: 'order',
+          revisionNumber: approvedRevisionNumber(await this.revisions.list(shopId, circuit.id)) ?? null,
+          details: { orderId, supplier: supplier.name },
+        });
+      }
     });
     return this.get(shopId, orderId);
   }

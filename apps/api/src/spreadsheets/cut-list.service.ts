@@ -4,14 +4,11 @@ import { ConflictError } from '../common/errors/app-error.js';
 import { CircuitDraftsService } from '../circuits/circuit-drafts.service.js';
 import { CircuitRevisionsService } from '../circuits/circuit-revisions.service.js';
 import { CircuitsService } from '../circuits/circuits.service.js';
-import type { CircuitStatus } from '../circuits/circuit-status.js';
 import { ShopCatalogueService } from '../parts/shop-catalogue.service.js';
 import { RulesService } from '../rules/rules.service.js';
+import { approvedRevisionNumber } from './approved-revision.js';
 import { cutListWorkbook } from './cut-list.workbook.js';
 import { safeFileName, workbookBuffer } from './spreadsheet.js';
-
-/** Statuses whose latest revision is the signed-off one. */
-const SIGNED_OFF: ReadonlySet<CircuitStatus> = new Set(['approved', 'ordered', 'installed']);
 
 export interface CutListChoice {
   revision?: number;
@@ -35,12 +32,11 @@ export class CutListService {
   ) {}
 
   /**
-   * Of the revision asked for, the draft when `draft` is set, or else the approved revision
-   * (the latest one of a circuit that is approved, ordered or installed).
+   * Of the revision asked for, the draft when `draft` is set, or else the latest signed-off revision.
    */
   async export(shopId: string, circuitId: string, choice: CutListChoice): Promise<CutListFile> {
     const circuit = await this.circuits.getOwn(shopId, circuitId);
-    const { document, basis, suffix } = await this.documentOf(shopId, circuitId, circuit.status, choice);
+    const { document, basis, suffix } = await this.documentOf(shopId, circuitId, choice);
     const [evaluation, catalogue] = await Promise.all([this.rules.evaluate(shopId, document), this.catalogue.partsOf(shopId)]);
     const workbook = cutListWorkbook({
       title: `${circuit.name}: cut list and parts`,
@@ -55,7 +51,6 @@ export class CutListService {
   private async documentOf(
     shopId: string,
     circuitId: string,
-    status: CircuitStatus,
     choice: CutListChoice,
   ): Promise<{ document: CircuitDocument; basis: string; suffix: string }> {
     if (choice.revision !== undefined) {
@@ -66,11 +61,11 @@ export class CutListService {
       const draft = await this.drafts.get(shopId, circuitId);
       return { document: draft.document, basis: 'Draft: not reviewed, do not build from it', suffix: 'draft' };
     }
-    const latest = (await this.revisions.list(shopId, circuitId)).at(-1);
-    if (!SIGNED_OFF.has(status) || !latest) {
+    const approved = approvedRevisionNumber(await this.revisions.list(shopId, circuitId));
+    if (approved === undefined) {
       throw new ConflictError('This circuit has no approved revision yet. Export the draft instead, or a numbered revision.');
     }
-    const revision = await this.revisions.get(shopId, circuitId, latest.number);
+    const revision = await this.revisions.get(shopId, circuitId, approved);
     return { document: revision.document, basis: `Approved revision ${revision.number}`, suffix: `rev${revision.number}` };
   }
 }

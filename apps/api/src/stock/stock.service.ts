@@ -1,19 +1,21 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
-import type { DataSource, EntityManager, Repository } from 'typeorm';
+import { In, type DataSource, type EntityManager, type Repository } from 'typeorm';
 import { NotFoundError, ValidationError } from '../common/errors/app-error.js';
 import { PartEntity } from '../parts/part.entity.js';
 import { ShopCatalogueService } from '../parts/shop-catalogue.service.js';
+import { UserEntity } from '../users/user.entity.js';
 import type { NewStockAdjustment, StockAdjustmentDto, StockAdjustmentResult } from './dto/stock-adjustment.schemas.js';
 import { StockAdjustmentEntity } from './stock-adjustment.entity.js';
 
-function toStockAdjustmentDto(row: StockAdjustmentEntity): StockAdjustmentDto {
+function toStockAdjustmentDto(row: StockAdjustmentEntity, actorName?: string): StockAdjustmentDto {
   return {
     id: row.id,
     partId: row.partId,
     delta: row.delta,
     reason: row.reason,
     actorId: row.actorId,
+    actor: row.actorId && actorName !== undefined ? { id: row.actorId, displayName: actorName } : null,
     createdAt: row.createdAt.toISOString(),
   };
 }
@@ -24,6 +26,7 @@ export class StockService {
   constructor(
     @InjectRepository(StockAdjustmentEntity) private readonly adjustments: Repository<StockAdjustmentEntity>,
     @InjectRepository(PartEntity) private readonly parts: Repository<PartEntity>,
+    @InjectRepository(UserEntity) private readonly users: Repository<UserEntity>,
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly catalogue: ShopCatalogueService,
   ) {}
@@ -56,6 +59,9 @@ export class StockService {
   async history(shopId: string, partId: string): Promise<StockAdjustmentDto[]> {
     if (!(await this.parts.existsBy({ id: partId, shopId }))) throw new NotFoundError('The part');
     const rows = await this.adjustments.find({ where: { shopId, partId }, order: { createdAt: 'DESC', id: 'ASC' }, take: 500 });
-    return rows.map(toStockAdjustmentDto);
+    const actorIds = [...new Set(rows.map((row) => row.actorId).filter((id) => id !== null))];
+    const actors = actorIds.length ? await this.users.findBy({ shopId, id: In(actorIds) }) : [];
+    const names = new Map(actors.map((user) => [user.id, user.displayName]));
+    return rows.map((row) => toStockAdjustmentDto(row, row.actorId ? names.get(row.actorId) : undefined));
   }
 }

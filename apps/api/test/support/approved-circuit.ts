@@ -1,4 +1,5 @@
 import type { CircuitDocumentInput } from '@linesmith/routing';
+import { CircuitRevisionEntity } from '../../src/circuits/circuit-revision.entity.js';
 import { CircuitEntity } from '../../src/circuits/circuit.entity.js';
 import { createCircuit } from './builds.js';
 import type { TestApp } from './test-app.js';
@@ -52,14 +53,17 @@ export function coolerLineDocument(id: (demoId: string) => string, supportsAtIn:
 }
 
 /**
- * A circuit with `document` saved as its draft and as revision 1, then marked approved in the
- * database (the sign-off flow itself is tested with the reviews).
+ * A circuit with `document` saved as its draft and as revision 1, then signed off directly in the
+ * database (revision locked and approved, circuit approved); the sign-off flow itself is tested
+ * with the reviews.
  */
 export async function approvedCircuit(testApp: TestApp, fabToken: string, buildId: string, name: string, document: CircuitDocumentInput) {
   const circuit = await createCircuit(testApp, fabToken, buildId, { name, kind: 'transmission-cooler' });
   const auth = { Authorization: `Bearer ${fabToken}` };
   await testApp.http().put(`/api/circuits/${circuit.id}/draft`).set(auth).set('If-Match', String(circuit.draftVersion)).send(document).expect(200);
   await testApp.http().post(`/api/circuits/${circuit.id}/revisions`).set(auth).send({ message: 'for review' }).expect(201);
+  const now = new Date();
+  await testApp.dataSource.getRepository(CircuitRevisionEntity).update({ circuitId: circuit.id, number: 1 }, { lockedAt: now, approvedAt: now });
   await testApp.dataSource.getRepository(CircuitEntity).update({ id: circuit.id }, { status: 'approved' });
   return circuit;
 }

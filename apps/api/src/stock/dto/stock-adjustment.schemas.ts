@@ -20,6 +20,8 @@ export interface StockAdjustmentDto {
   delta: number;
   reason: string;
   actorId: string | null;
+  /** Who booked it; null when unknown (e.g. the account was removed). */
+  actor: { id: string; displayName: string } | null;
   createdAt: string;
 }
 
