@@ -141,6 +141,21 @@ describe('cut-list spreadsheets and orders (e2e)', () => {
     });
   });
 
+  it('deletes only parts nothing uses; a part on a revision must be retired instead', async () => {
+    const used = await testApp.http().delete(`/api/parts/${id('demo-hose-6-rubber')}`).set(as(clerkToken)).expect(409);
+    expect(used.body.message).toMatch(/Retire it instead/);
+    const created = await testApp
+      .http()
+      .post('/api/parts')
+      .set(as(clerkToken))
+      .send({ kind: 'clamp', description: 'Entered by mistake', attributes: { fitsOd: { minIn: 0.5, maxIn: 0.6 } } })
+      .expect(201);
+    await testApp.http().delete(`/api/parts/${created.body.id}`).set(as(fabToken)).expect(403);
+    await testApp.http().delete(`/api/parts/${created.body.id}`).set(as(otherToken)).expect(404);
+    await testApp.http().delete(`/api/parts/${created.body.id}`).set(as(clerkToken)).expect(204);
+    await testApp.http().get(`/api/parts/${created.body.id}`).set(as(clerkToken)).expect(404);
+  });
+
   describe('orders', () => {
     let orders: ApiOrder[];
 

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, Patch, Post, Query } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, Patch, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
@@ -35,5 +35,13 @@ export class PartsController {
   @Patch(':id')
   update(@CurrentUser() caller: AuthUser, @Param('id', ParseIdPipe) id: string, @Body() body: UpdatePartDto): Promise<PartDto> {
     return this.parts.update(caller.shopId, id, body);
+  }
+
+  /** Only for parts nothing uses yet; otherwise 409 and the part should be retired (PATCH retired: true). */
+  @Roles('admin', 'parts-clerk')
+  @Delete(':id')
+  @HttpCode(204)
+  remove(@CurrentUser() caller: AuthUser, @Param('id', ParseIdPipe) id: string): Promise<void> {
+    return this.parts.remove(caller.shopId, id);
   }
 }

@@ -77,6 +77,29 @@ export class PartsService {
     return toPartDto(await this.getOwn(shopId, partId));
   }
 
+  /**
+   * Deletes a part nobody uses yet (e.g. entered by mistake). A part named by any circuit draft or
+   * revision, or by an order, answers 409: retire it instead, so approved records keep their parts.
+   */
+  async remove(shopId: string, partId: string): Promise<void> {
+    const part = await this.getOwn(shopId, partId);
+    const quoted = `%${JSON.stringify(partId)}%`;
+    const [usage] = (await this.parts.manager.query(
+      `SELECT
+         EXISTS (SELECT 1 FROM "circuits" WHERE "shop_id" = $1 AND "draft"::text LIKE $2) AS "inDraft",
+         EXISTS (SELECT 1 FROM "circuit_revisions" WHERE "shop_id" = $1 AND "document"::text LIKE $2) AS "inRevision",
+         EXISTS (SELECT 1 FROM "order_lines" WHERE "part_id" = $3) AS "inOrder"`,
+      [shopId, quoted, partId],
+    )) as Array<{ inDraft: boolean; inRevision: boolean; inOrder: boolean }>;
+    if (usage.inDraft || usage.inRevision || usage.inOrder) {
+      throw new ConflictError('This part is used by a circuit or an order, so it cannot be deleted. Retire it instead.', {
+        current: toPartDto(part),
+      });
+    }
+    await this.parts.delete({ id: partId, shopId });
+    this.catalogue.invalidate(shopId);
+  }
+
   private async getOwn(shopId: string, partId: string): Promise<PartEntity> {
     const part = await this.parts.findOneBy({ id: partId, shopId });
     if (!part) throw new NotFoundError('The part');
