@@ -1,7 +1,18 @@
+import { createServer } from 'node:net';
 import { decodeQuotedPrintable, type FakeSmtp } from '../src/mail/fake-smtp-server.js';
+import { UserEntity } from '../src/users/user.entity.js';
 import { startTestSmtp, tokenFromMail } from './support/fake-smtp.js';
 import { createTestShop, removeShops, signIn, TEST_PASSWORD, type TestShop } from './support/fixtures.js';
 import { startTestApp, type TestApp } from './support/test-app.js';
+
+/** A loopback port with nothing listening: bind an ephemeral port, then free it. */
+async function closedPort(): Promise<number> {
+  const server = createServer();
+  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
+  const { port } = server.address() as { port: number };
+  await new Promise<void>((resolve) => server.close(() => resolve()));
+  return port;
+}
 
 describe('invitations, password reset and the outbox (e2e)', () => {
   let smtp: FakeSmtp;
@@ -47,6 +58,20 @@ describe('invitations, password reset and the outbox (e2e)', () => {
 
     const outbox = await testApp.http().get('/api/outbox').set(as(adminToken)).expect(200);
     expect(outbox.body).toEqual(expect.arrayContaining([expect.objectContaining({ to: email, status: 'sent' })]));
+  });
+
+  it('undoes an invitation whose e-mail cannot be sent, and records the failure in the outbox', async () => {
+    const down = await startTestApp({ SMTP_PORT: String(await closedPort()) });
+    try {
+      const token = (await signIn(down, (await shop.addUser(['admin'], 'admin2')).email)).accessToken;
+      const email = `nomail.${Date.now()}@${shop.shop.slug}.example`;
+      await down.http().post('/api/users/invite').set(as(token)).send({ email, displayName: 'No Mail', roles: ['reviewer'] }).expect(503);
+      expect(await down.dataSource.getRepository(UserEntity).existsBy({ email })).toBe(false);
+      const outbox = await down.http().get('/api/outbox').set(as(token)).expect(200);
+      expect(outbox.body).toEqual(expect.arrayContaining([expect.objectContaining({ to: email, status: 'failed', error: expect.any(String) })]));
+    } finally {
+      await down.close();
+    }
   });
 
   it('only admins invite, and the outbox is for admins', async () => {

@@ -213,6 +213,8 @@ describe('cut-list spreadsheets and orders (e2e)', () => {
     it('e-mails the sheet to the supplier, marks the order sent and the circuits ordered', async () => {
       const order = orders.find((candidate) => candidate.supplierId !== null) as ApiOrder;
       const supplier = await testApp.dataSource.getRepository(SupplierEntity).findOneByOrFail({ id: order.supplierId as string });
+      const shown = await testApp.http().get(`/api/orders/${order.id}`).set(as(clerkToken)).expect(200);
+      expect(shown.body.supplier).toEqual({ id: supplier.id, name: supplier.name, email: supplier.email, accountNumber: supplier.accountNumber });
       const sent = await testApp.http().post(`/api/orders/${order.id}/send`).set(as(clerkToken)).expect(200);
       expect(sent.body).toMatchObject({ status: 'sent', sentAt: expect.any(String) });
       const mail = smtp.messages().find((message) => message.to.includes(supplier.email));

@@ -31,23 +31,29 @@ export class AccountLinksService {
     @InjectDataSource() private readonly dataSource: DataSource,
   ) {}
 
-  /** Creates the user without a password and e-mails a link to choose one (valid 7 days). */
+  /** Creates the user without a password and e-mails a link to choose one (valid 7 days); a failed e-mail undoes it. */
   async invite(shopId: string, inviterId: string, input: InviteUserInput): Promise<UserDto> {
     const user = await this.users.createUser(shopId, input);
     const [shop, inviter] = await Promise.all([this.shops.getOwnShop(shopId), this.users.getOwn(shopId, inviterId)]);
     const link = this.link('accept-invite', await this.tokens.issue(user.id, 'invite'));
-    await this.mail.send({
-      shopId,
-      to: user.email,
-      subject: `You are invited to ${shop.name} on Linesmith`,
-      text: [
-        `Hello ${user.displayName},`,
-        '',
-        `${inviter.displayName} invited you to join ${shop.name} on Linesmith.`,
-        'Choose your password with this link (it works once, for 7 days):',
-        link,
-      ].join('\n'),
-    });
+    try {
+      await this.mail.send({
+        shopId,
+        to: user.email,
+        subject: `You are invited to ${shop.name} on Linesmith`,
+        text: [
+          `Hello ${user.displayName},`,
+          '',
+          `${inviter.displayName} invited you to join ${shop.name} on Linesmith.`,
+          'Choose your password with this link (it works once, for 7 days):',
+          link,
+        ].join('\n'),
+      });
+    } catch (error) {
+      // Without the e-mail nobody can use the invitation: undo it so the admin can simply retry.
+      await this.dataSource.getRepository(UserEntity).delete({ id: user.id, shopId });
+      throw error;
+    }
     return toUserDto(user);
   }
 

@@ -1,4 +1,4 @@
-import type { OrderDto, OrderLineDto } from './dto/order.schemas.js';
+import type { OrderDto, OrderLineDto, OrderSupplierDto } from './dto/order.schemas.js';
 import type { OrderLineEntity } from './order-line.entity.js';
 import type { OrderEntity } from './order.entity.js';
 
@@ -16,11 +16,12 @@ export function toOrderLineDto(line: OrderLineEntity): OrderLineDto {
   };
 }
 
-export function toOrderDto(order: OrderEntity, lines: readonly OrderLineEntity[], supplierName: string | null): OrderDto {
+export function toOrderDto(order: OrderEntity, lines: readonly OrderLineEntity[], supplier: OrderSupplierDto | null): OrderDto {
   return {
     id: order.id,
     supplierId: order.supplierId,
-    supplierName,
+    supplier,
+    supplierName: supplier?.name ?? null,
     status: order.status,
     circuitIds: order.circuitIds,
     taxRatePercent: order.taxRatePercent,

@@ -14,13 +14,17 @@ import { approvedRevisionNumber } from '../spreadsheets/approved-revision.js';
 import { safeFileName, workbookBuffer, XLSX_CONTENT_TYPE } from '../spreadsheets/spreadsheet.js';
 import { StockService } from '../stock/stock.service.js';
 import { SupplierEntity } from '../suppliers/supplier.entity.js';
-import type { DraftOrdersResult, OrderDto, ReceiveOrderInput } from './dto/order.schemas.js';
+import type { DraftOrdersResult, OrderDto, OrderSupplierDto, ReceiveOrderInput } from './dto/order.schemas.js';
 import { OrderLineEntity } from './order-line.entity.js';
 import { orderSheetWorkbook } from './order-sheet.workbook.js';
 import { OrderEntity } from './order.entity.js';
 import { toOrderDto } from './order.mapper.js';
 
 const EPSILON = 1e-9;
+
+function supplierRef(supplier: SupplierEntity): OrderSupplierDto {
+  return { id: supplier.id, name: supplier.name, email: supplier.email, accountNumber: supplier.accountNumber };
+}
 
 export interface OrderFile {
   fileName: string;
@@ -123,12 +127,12 @@ export class OrdersService {
   async list(shopId: string): Promise<OrderDto[]> {
     const rows = await this.orders.find({ where: { shopId }, order: { createdAt: 'DESC', id: 'ASC' }, take: 500 });
     const lines = rows.length ? await this.orderLines.findBy({ orderId: In(rows.map((row) => row.id)) }) : [];
-    const names = await this.supplierNames(shopId);
+    const suppliers = await this.supplierRefs(shopId);
     return rows.map((row) =>
       toOrderDto(
         row,
         lines.filter((line) => line.orderId === row.id),
-        row.supplierId ? (names.get(row.supplierId) ?? null) : null,
+        row.supplierId ? (suppliers.get(row.supplierId) ?? null) : null,
       ),
     );
   }
@@ -140,7 +144,7 @@ export class OrdersService {
       this.orderLines.findBy({ orderId }),
       order.supplierId ? this.suppliers.findOneBy({ id: order.supplierId, shopId }) : null,
     ]);
-    return toOrderDto(order, lines, supplier?.name ?? null);
+    return toOrderDto(order, lines, supplier ? supplierRef(supplier) : null);
   }
 
   async exportSheet(shopId: string, orderId: string): Promise<OrderFile> {
@@ -262,8 +266,8 @@ export class OrdersService {
     return this.get(shopId, orderId);
   }
 
-  private async supplierNames(shopId: string): Promise<Map<string, string>> {
-    const rows = await this.suppliers.find({ where: { shopId }, select: { id: true, name: true } });
-    return new Map(rows.map((row) => [row.id, row.name]));
+  private async supplierRefs(shopId: string): Promise<Map<string, OrderSupplierDto>> {
+    const rows = await this.suppliers.findBy({ shopId });
+    return new Map(rows.map((row) => [row.id, supplierRef(row)]));
   }
 }

@@ -37,9 +37,18 @@ export interface OrderLineDto {
   receivedQuantity: number;
 }
 
+/** Where the order goes: shown so the clerk can confirm the address before sending. */
+export interface OrderSupplierDto {
+  id: string;
+  name: string;
+  email: string;
+  accountNumber: string;
+}
+
 export interface OrderDto {
   id: string;
   supplierId: string | null;
+  supplier: OrderSupplierDto | null;
   supplierName: string | null;
   status: OrderStatus;
   circuitIds: string[];
