@@ -1,11 +1,13 @@
 import { decodeQuotedPrintable, startFakeSmtp, type FakeSmtp } from '../../src/mail/fake-smtp-server.js';
-import { mkdtempSync } from 'node:fs';
+import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 
-/** A fake SMTP server on a free port with its own mail folder, for one e2e file. */
-export function startTestSmtp(): Promise<FakeSmtp> {
-  return startFakeSmtp({ port: 0, dir: mkdtempSync(join(tmpdir(), 'linesmith-mail-')) });
+/** A fake SMTP server on a free port with its own mail folder (removed on close), for one e2e file. */
+export async function startTestSmtp(): Promise<FakeSmtp> {
+  const dir = mkdtempSync(join(tmpdir(), 'linesmith-mail-'));
+  const smtp = await startFakeSmtp({ port: 0, dir });
+  return { ...smtp, close: () => smtp.close().then(() => rmSync(dir, { recursive: true, force: true })) };
 }
 
 /** The token of the last link to `path` e-mailed to `to`. */
