@@ -8,7 +8,7 @@ set +e # run every step; the summary decides the exit code
 
 REPORTS="$ROOT/artifacts/reports"
 rm -rf "$REPORTS"; mkdir -p "$REPORTS" "$ROOT/artifacts/screenshots"
-trap stop_server EXIT
+trap 'stop_server; stop_fake_smtp' EXIT
 TEST_PORT="${TEST_PORT:-3100}"
 TEST_DB=linesmith_test
 STEPS=()
@@ -53,12 +53,15 @@ log "api (jest: unit and e2e against PostgreSQL)"
 STEPS+=(api)
 
 check build-apps build_all
-if migrate_and_seed "$DATABASE_URL" && start_server "$TEST_PORT" "$DATABASE_URL" "$ROOT/artifacts/server.log"; then
+export SMTP_PORT="${TEST_SMTP_PORT:-2625}" MAIL_DIR="$ROOT/artifacts/mail" APP_URL="http://127.0.0.1:$TEST_PORT"
+if migrate_and_seed "$DATABASE_URL" && start_fake_smtp "$SMTP_PORT" "$MAIL_DIR" "$ROOT/artifacts/fake-smtp.log" &&
+  start_server "$TEST_PORT" "$DATABASE_URL" "$ROOT/artifacts/server.log"; then
   log "browser tests (playwright-core + Debian chromium) against http://127.0.0.1:$TEST_PORT"
   (cd "$ROOT/apps/web" && LINESMITH_URL="http://127.0.0.1:$TEST_PORT" ARTIFACTS_DIR="$ROOT/artifacts" \
     npx vitest run -c vitest.browser.config.ts --reporter=default --reporter=json --outputFile.json="$REPORTS/browser.json")
 fi
 STEPS+=(browser)
 stop_server
+stop_fake_smtp
 
 node "$ROOT/scripts/summarize.mjs" "$REPORTS" "${STEPS[@]}"

@@ -48,3 +48,28 @@ build_all() {
 migrate_and_seed() { # migrate_and_seed <database url>
   (cd "$ROOT/apps/api" && DATABASE_URL="$1" node dist/database/seed.js)
 }
+
+# The local stand-in for the SMTP service: accepts every message on loopback and keeps it as an
+# .eml file under $MAIL_DIR (default .data/mail). start_fake_smtp <port> <mail dir> <log file>.
+start_fake_smtp() {
+  local port="$1" dir="$2" logfile="$3"
+  mkdir -p "$(dirname "$logfile")" "$dir"
+  ( cd "$ROOT" && FAKE_SMTP_PORT="$port" MAIL_DIR="$dir" exec node apps/api/dist/mail/fake-smtp-server.js ) >"$logfile" 2>&1 &
+  SMTP_PID=$!
+  export SMTP_PID
+  for _ in $(seq 1 50); do
+    (exec 3<>"/dev/tcp/127.0.0.1/$port") 2>/dev/null && return 0
+    kill -0 "$SMTP_PID" 2>/dev/null || break
+    sleep 0.1
+  done
+  log "the fake SMTP server did not start on port $port; see $logfile"
+  return 1
+}
+
+stop_fake_smtp() {
+  if [ -n "${SMTP_PID:-}" ] && kill -0 "$SMTP_PID" 2>/dev/null; then
+    kill "$SMTP_PID" 2>/dev/null || true
+    wait "$SMTP_PID" 2>/dev/null || true
+  fi
+  SMTP_PID=
+}
