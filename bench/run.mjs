@@ -1,6 +1,8 @@
 // npm run bench: runs every benchmark module, prints one table and writes bench/results.json.
 // Each module exports an async function returning rows { name, median, unit, goal?, ok? }.
-// TypeScript modules are loaded through Vite's module runner (no separate TS loader needed).
+// TypeScript modules are loaded through Vite's module runner (no separate TS loader needed); the
+// .mjs suites (API, export, web size, editor) are plain Node modules. The API and browser suites
+// need the server that scripts/bench.sh starts (LINESMITH_URL).
 import { writeFileSync } from 'node:fs';
 import { cpus, totalmem } from 'node:os';
 import { fileURLToPath } from 'node:url';
@@ -10,12 +12,17 @@ const root = fileURLToPath(new URL('..', import.meta.url));
 const suites = [
   { file: 'libs/catalog/bench/run.ts', fn: 'benchCatalog' },
   { file: 'libs/routing/bench/run.ts', fn: 'benchRouting' },
+  { file: 'bench/check-endpoint.mjs', fn: 'benchCheckEndpoint' },
+  { file: 'bench/order-sheet-export.mjs', fn: 'benchOrderSheetExport' },
+  { file: 'bench/sign-in-size.mjs', fn: 'benchSignInSize' },
+  { file: 'bench/editor-drag.mjs', fn: 'benchEditorDrag' },
 ];
+const load = (file) => (file.endsWith('.ts') ? runnerImport(`${root}${file}`).then((r) => r.module) : import(`${root}${file}`));
 
 const rows = [];
 for (const suite of suites) {
   try {
-    const { module } = await runnerImport(`${root}${suite.file}`);
+    const module = await load(suite.file);
     rows.push(...(await module[suite.fn]()));
   } catch (error) {
     rows.push({ name: `${suite.file} failed: ${error instanceof Error ? error.message : error}`, median: NaN, unit: '', ok: false });
