@@ -1,4 +1,5 @@
 import { createBuild, createCircuit } from './support/builds.js';
+import type { UserEntity } from '../src/users/user.entity.js';
 import { createTestShop, removeShops, signIn, type TestShop } from './support/fixtures.js';
 import { startTestApp, type TestApp } from './support/test-app.js';
 
@@ -7,6 +8,7 @@ describe('builds (e2e)', () => {
   let shopA: TestShop;
   let shopB: TestShop;
   let fabA: string;
+  let fabAUser: UserEntity;
   let reviewerA: string;
   let fabB: string;
 
@@ -14,7 +16,8 @@ describe('builds (e2e)', () => {
     testApp = await startTestApp();
     shopA = await createTestShop(testApp, 'builds-a');
     shopB = await createTestShop(testApp, 'builds-b');
-    fabA = (await signIn(testApp, (await shopA.addUser(['fabricator'])).email)).accessToken;
+    fabAUser = await shopA.addUser(['fabricator']);
+    fabA = (await signIn(testApp, fabAUser.email)).accessToken;
     reviewerA = (await signIn(testApp, (await shopA.addUser(['reviewer'])).email)).accessToken;
     fabB = (await signIn(testApp, (await shopB.addUser(['fabricator'])).email)).accessToken;
   });
@@ -37,6 +40,9 @@ describe('builds (e2e)', () => {
       status: 'open',
       version: 1,
       circuitCounts: { total: 0, byStatus: { draft: 0, approved: 0 } },
+      // The creator by id and by name, so the build page can say who started it.
+      createdById: fabAUser.id,
+      createdBy: { id: fabAUser.id, displayName: fabAUser.displayName },
     });
     await testApp.http().post('/api/builds').set(as(reviewerA)).send({ vehicle: { make: 'X' } }).expect(403);
     await testApp.http().get(`/api/builds/${build.id}`).set(as(reviewerA)).expect(200);
@@ -95,6 +101,9 @@ describe('builds (e2e)', () => {
       total: 2,
       byStatus: { draft: 1, 'in-review': 0, returned: 0, approved: 1, ordered: 0, installed: 0 },
     });
+    expect(list.body.items[0].createdBy).toEqual({ id: fabAUser.id, displayName: fabAUser.displayName });
+    const one = await testApp.http().get(`/api/builds/${build.id}`).set(as(fabA)).expect(200);
+    expect(one.body.createdBy).toEqual({ id: fabAUser.id, displayName: fabAUser.displayName });
   });
 
   it('patches against the version: 200 with the next version, 409 with the current build when stale', async () => {

@@ -1,4 +1,5 @@
 import { circuitDocumentSchema, circuitKinds, type CircuitDocument } from '@linesmith/routing';
+import type { UserEntity } from '../src/users/user.entity.js';
 import { createBuild, createCircuit } from './support/builds.js';
 import { createTestShop, removeShops, signIn, type TestShop } from './support/fixtures.js';
 import { startTestApp, type TestApp } from './support/test-app.js';
@@ -31,6 +32,7 @@ describe('circuits, drafts and revisions (e2e)', () => {
   let shopA: TestShop;
   let shopB: TestShop;
   let fabA: string;
+  let fabAUser: UserEntity;
   let fabA2: string;
   let reviewerA: string;
   let fabB: string;
@@ -40,7 +42,8 @@ describe('circuits, drafts and revisions (e2e)', () => {
     testApp = await startTestApp();
     shopA = await createTestShop(testApp, 'circuits-a');
     shopB = await createTestShop(testApp, 'circuits-b');
-    fabA = (await signIn(testApp, (await shopA.addUser(['fabricator'], 'fab1')).email)).accessToken;
+    fabAUser = await shopA.addUser(['fabricator'], 'fab1');
+    fabA = (await signIn(testApp, fabAUser.email)).accessToken;
     fabA2 = (await signIn(testApp, (await shopA.addUser(['fabricator'], 'fab2')).email)).accessToken;
     reviewerA = (await signIn(testApp, (await shopA.addUser(['reviewer'])).email)).accessToken;
     fabB = (await signIn(testApp, (await shopB.addUser(['fabricator'])).email)).accessToken;
@@ -163,7 +166,8 @@ describe('circuits, drafts and revisions (e2e)', () => {
     const url = `/api/circuits/${circuit.id}`;
     await testApp.http().put(`${url}/draft`).set(as(fabA)).set('If-Match', '1').send(sketch('first')).expect(200);
     const one = await testApp.http().post(`${url}/revisions`).set(as(fabA)).send({ message: 'Units placed' }).expect(201);
-    expect(one.body).toMatchObject({ circuitId: circuit.id, number: 1, message: 'Units placed', draftVersion: 2 });
+    const author = { id: fabAUser.id, displayName: fabAUser.displayName };
+    expect(one.body).toMatchObject({ circuitId: circuit.id, number: 1, message: 'Units placed', draftVersion: 2, authorId: author.id, author });
     expect(one.body.document).toEqual(sketch('first'));
 
     await testApp.http().put(`${url}/draft`).set(as(fabA)).set('If-Match', '2').send(sketch('second')).expect(200);
@@ -173,6 +177,7 @@ describe('circuits, drafts and revisions (e2e)', () => {
 
     const first = await testApp.http().get(`${url}/revisions/1`).set(as(reviewerA)).expect(200);
     expect(first.body.document.units[0].label).toBe('first');
+    expect(first.body.author).toEqual(author);
     expect((await testApp.http().get(`${url}/revisions/2`).set(as(fabA)).expect(200)).body.document.units[0].label).toBe('second');
 
     // Concurrent snapshots still take distinct, consecutive numbers (row lock on the circuit).
@@ -183,6 +188,7 @@ describe('circuits, drafts and revisions (e2e)', () => {
     const list = await testApp.http().get(`${url}/revisions`).set(as(fabA)).expect(200);
     expect(list.body.map((r: { number: number }) => r.number)).toEqual([1, 2, 3, 4, 5]);
     expect(list.body[0]).not.toHaveProperty('document');
+    expect(list.body.map((r: { author: unknown }) => r.author)).toEqual([author, author, author, author, author]);
     await testApp.http().get(`${url}/revisions/9`).set(as(fabA)).expect(404);
     await testApp.http().get(`${url}/revisions/zero`).set(as(fabA)).expect(404);
 

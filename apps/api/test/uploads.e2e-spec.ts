@@ -15,6 +15,7 @@ describe('build photos (e2e)', () => {
   let shopA: TestShop;
   let shopB: TestShop;
   let fabA: string;
+  let fabAUserId: string;
   let clerkA: string;
   let fabB: string;
   let buildId: string;
@@ -24,7 +25,9 @@ describe('build photos (e2e)', () => {
     testApp = await startTestApp({ STORAGE_DRIVER: 'local', STORAGE_DIR: storageDir });
     shopA = await createTestShop(testApp, 'uploads-a');
     shopB = await createTestShop(testApp, 'uploads-b');
-    fabA = (await signIn(testApp, (await shopA.addUser(['fabricator'])).email)).accessToken;
+    const fabAUser = await shopA.addUser(['fabricator']);
+    fabAUserId = fabAUser.id;
+    fabA = (await signIn(testApp, fabAUser.email)).accessToken;
     clerkA = (await signIn(testApp, (await shopA.addUser(['parts-clerk'])).email)).accessToken;
     fabB = (await signIn(testApp, (await shopB.addUser(['fabricator'])).email)).accessToken;
     buildId = (await createBuild(testApp, fabA, { vehicle: { make: 'Redfern' } })).id;
@@ -52,6 +55,7 @@ describe('build photos (e2e)', () => {
       sha256: createHash('sha256').update(bytes).digest('hex'),
       widthPx: 7,
       heightPx: 5,
+      uploadedById: fabAUserId,
       contentUrl: `/api/uploads/${response.body.id}/content`,
     });
     expect(response.body).not.toHaveProperty('storageKey');

@@ -1,4 +1,5 @@
 import { CIRCUIT_STATUSES, type CircuitStatus } from '../circuits/circuit-status.js';
+import { toUserRef } from '../users/user-ref.js';
 import type { BuildEntity } from './build.entity.js';
 import type { BuildDto, CircuitCountsDto } from './dto/build.dto.js';
 
@@ -9,6 +10,7 @@ export function emptyCircuitCounts(): CircuitCountsDto {
   };
 }
 
+/** Needs `createdBy` joined to name the creator. */
 export function toBuildDto(build: BuildEntity, circuitCounts: CircuitCountsDto = emptyCircuitCounts()): BuildDto {
   return {
     id: build.id,
@@ -23,6 +25,7 @@ export function toBuildDto(build: BuildEntity, circuitCounts: CircuitCountsDto =
     notes: build.notes,
     status: build.status,
     createdById: build.createdById,
+    createdBy: toUserRef(build.createdBy),
     circuitCounts,
     version: build.version,
     createdAt: build.createdAt.toISOString(),

@@ -2,12 +2,14 @@ import { Test } from '@nestjs/testing';
 import { getRepositoryToken } from '@nestjs/typeorm';
 import { CircuitEntity } from '../circuits/circuit.entity.js';
 import { ConflictError, NotFoundError } from '../common/errors/app-error.js';
+import { UserEntity } from '../users/user.entity.js';
 import { BuildEntity } from './build.entity.js';
 import { BuildsService, escapeLike } from './builds.service.js';
 
 const SHOP = '11111111-1111-4111-8111-111111111111';
 const BUILD = '22222222-2222-4222-8222-222222222222';
 const USER = '33333333-3333-4333-8333-333333333333';
+const author = Object.assign(new UserEntity(), { id: USER, displayName: 'Rafe Okonkwo' });
 
 function buildRow(overrides: Partial<BuildEntity> = {}): BuildEntity {
   return Object.assign(new BuildEntity(), {
@@ -34,7 +36,7 @@ function buildRow(overrides: Partial<BuildEntity> = {}): BuildEntity {
 /** A chainable stand-in for TypeORM's SelectQueryBuilder that records its calls. */
 function recordingBuilder(result: { many?: [BuildEntity[], number]; raw?: unknown[] }) {
   const builder: Record<string, jest.Mock> = {};
-  for (const method of ['where', 'andWhere', 'orderBy', 'addOrderBy', 'offset', 'limit', 'select', 'addSelect', 'groupBy', 'addGroupBy']) {
+  for (const method of ['leftJoinAndSelect', 'where', 'andWhere', 'orderBy', 'addOrderBy', 'offset', 'limit', 'select', 'addSelect', 'groupBy', 'addGroupBy']) {
     builder[method] = jest.fn(() => builder);
   }
   builder.getManyAndCount = jest.fn(async () => result.many ?? [[], 0]);
@@ -44,7 +46,7 @@ function recordingBuilder(result: { many?: [BuildEntity[], number]; raw?: unknow
 
 describe('BuildsService', () => {
   let service: BuildsService;
-  const builds = { createQueryBuilder: jest.fn(), findOneBy: jest.fn(), save: jest.fn(), create: jest.fn(), update: jest.fn() };
+  const builds = { createQueryBuilder: jest.fn(), findOneBy: jest.fn(), findOne: jest.fn(), save: jest.fn(), create: jest.fn(), update: jest.fn() };
   const circuits = { createQueryBuilder: jest.fn() };
 
   beforeEach(async () => {
@@ -99,13 +101,17 @@ describe('BuildsService', () => {
 
   it('creates in the caller shop with the caller as author', async () => {
     builds.save.mockImplementation(async (row: BuildEntity) => Object.assign(row, { id: BUILD, version: 1, createdAt: new Date(), updatedAt: new Date() }));
+    builds.findOne.mockImplementation(async () => Object.assign(builds.save.mock.calls[0][0], { createdBy: author }));
     const dto = await service.create(SHOP, USER, { vehicle: { make: 'Redfern' }, customer: {}, notes: '', status: 'open' });
     expect(builds.save.mock.calls[0][0]).toMatchObject({ shopId: SHOP, createdById: USER, vehicleMake: 'Redfern', vehicleModel: '' });
+    expect(builds.findOne).toHaveBeenCalledWith({ where: { id: BUILD, shopId: SHOP }, relations: { createdBy: true } });
     expect(dto.circuitCounts.total).toBe(0);
+    expect(dto.createdBy).toEqual({ id: USER, displayName: 'Rafe Okonkwo' });
   });
 
   it('updates with a version guard and answers 409 with the current build when stale', async () => {
     builds.findOneBy.mockResolvedValue(buildRow({ version: 3 }));
+    builds.findOne.mockResolvedValue(buildRow({ version: 3 }));
     builds.update.mockResolvedValue({ affected: 1 });
     await service.update(SHOP, BUILD, { version: 3, notes: 'new', customer: { phone: '555-0100' } });
     expect(builds.update).toHaveBeenCalledWith({ id: BUILD, shopId: SHOP, version: 3 }, { notes: 'new', customerPhone: '555-0100' });
@@ -120,7 +126,10 @@ describe('BuildsService', () => {
 
   it('answers 404 for a build of another shop', async () => {
     builds.findOneBy.mockResolvedValue(null);
+    builds.findOne.mockResolvedValue(null);
     await expect(service.get(SHOP, BUILD)).rejects.toBeInstanceOf(NotFoundError);
+    expect(builds.findOne).toHaveBeenCalledWith({ where: { id: BUILD, shopId: SHOP }, relations: { createdBy: true } });
+    await expect(service.getOwn(SHOP, BUILD)).rejects.toBeInstanceOf(NotFoundError);
     expect(builds.findOneBy).toHaveBeenCalledWith({ id: BUILD, shopId: SHOP });
   });
 });

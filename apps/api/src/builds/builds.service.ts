@@ -65,7 +65,10 @@ export class BuildsService {
   ) {}
 
   async list(shopId: string, query: ListBuildsQuery): Promise<Page<BuildDto>> {
-    const select = this.builds.createQueryBuilder('build').where('build.shop_id = :shopId', { shopId });
+    const select = this.builds
+      .createQueryBuilder('build')
+      .leftJoinAndSelect('build.createdBy', 'createdBy')
+      .where('build.shop_id = :shopId', { shopId });
     if (query.status) select.andWhere('build.status IN (:...statuses)', { statuses: query.status });
     // Every word must appear somewhere in the vehicle or customer text: "blazer 1976" finds the 1976 Blazer.
     (query.search ?? '')
@@ -98,7 +101,8 @@ export class BuildsService {
   }
 
   async get(shopId: string, buildId: string): Promise<BuildDto> {
-    const build = await this.getOwn(shopId, buildId);
+    const build = await this.builds.findOne({ where: { id: buildId, shopId }, relations: { createdBy: true } });
+    if (!build) throw new NotFoundError('The build');
     return toBuildDto(build, (await this.circuitCounts(shopId, [build.id])).get(build.id));
   }
 
@@ -118,18 +122,18 @@ export class BuildsService {
         ...fieldsOf(input),
       }),
     );
-    return toBuildDto(build);
+    return this.get(shopId, build.id);
   }
 
   /** Applies an edit made against `input.version`; a stale version answers 409 with the current build. */
   async update(shopId: string, buildId: string, input: UpdateBuildInput): Promise<BuildDto> {
     const build = await this.getOwn(shopId, buildId);
-    if (build.version !== input.version) throw await this.staleVersion(build);
+    if (build.version !== input.version) throw await this.staleVersion(shopId, buildId);
     const { version, ...changes } = input;
     const fields = fieldsOf(changes);
     if (Object.keys(fields).length > 0) {
       const result = await this.builds.update({ id: buildId, shopId, version }, fields);
-      if (!result.affected) throw await this.staleVersion(await this.getOwn(shopId, buildId));
+      if (!result.affected) throw await this.staleVersion(shopId, buildId);
     }
     return this.get(shopId, buildId);
   }
@@ -156,10 +160,9 @@ export class BuildsService {
     return counts;
   }
 
-  private async staleVersion(current: BuildEntity): Promise<ConflictError> {
-    const counts = await this.circuitCounts(current.shopId, [current.id]);
+  private async staleVersion(shopId: string, buildId: string): Promise<ConflictError> {
     return new ConflictError('This build was changed by someone else. Review the current values and try again.', {
-      current: toBuildDto(current, counts.get(current.id)),
+      current: await this.get(shopId, buildId),
     });
   }
 }

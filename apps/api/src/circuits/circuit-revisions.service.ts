@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import type { DataSource, EntityManager, Repository } from 'typeorm';
 import { NotFoundError } from '../common/errors/app-error.js';
+import { UserEntity } from '../users/user.entity.js';
 import { CircuitRevisionEntity } from './circuit-revision.entity.js';
 import { CircuitEntity } from './circuit.entity.js';
 import { readStoredDocument } from './circuit-document.js';
@@ -19,7 +20,7 @@ export class CircuitRevisionsService {
 
   async list(shopId: string, circuitId: string): Promise<RevisionSummaryDto[]> {
     await this.assertCircuit(shopId, circuitId);
-    const rows = await this.revisions.find({ where: { shopId, circuitId }, order: { number: 'ASC' } });
+    const rows = await this.revisions.find({ where: { shopId, circuitId }, order: { number: 'ASC' }, relations: { author: true } });
     return rows.map(toRevisionSummaryDto);
   }
 
@@ -27,6 +28,7 @@ export class CircuitRevisionsService {
     const revision = await this.revisions
       .createQueryBuilder('revision')
       .addSelect('revision.document')
+      .leftJoinAndSelect('revision.author', 'author')
       .where('revision.shop_id = :shopId AND revision.circuit_id = :circuitId AND revision.number = :number', {
         shopId,
         circuitId,
@@ -78,6 +80,7 @@ export class CircuitRevisionsService {
           message,
         }),
       );
+      saved.author = await tx.getRepository(UserEntity).findOneBy({ id: authorId });
       return toRevisionDto(saved);
     };
     return manager ? run(manager) : this.dataSource.transaction(run);

@@ -2,6 +2,7 @@ import type { CircuitRevisionEntity } from './circuit-revision.entity.js';
 import type { CircuitEntity } from './circuit.entity.js';
 import { readStoredDocument } from './circuit-document.js';
 import type { CircuitDto, RevisionDto, RevisionSummaryDto } from './dto/circuit.dto.js';
+import { toUserRef } from '../users/user-ref.js';
 
 export function toCircuitDto(circuit: CircuitEntity): CircuitDto {
   return {
@@ -20,6 +21,7 @@ export function toCircuitDto(circuit: CircuitEntity): CircuitDto {
   };
 }
 
+/** Needs `author` joined to name the author. */
 export function toRevisionSummaryDto(revision: CircuitRevisionEntity): RevisionSummaryDto {
   return {
     id: revision.id,
@@ -27,6 +29,7 @@ export function toRevisionSummaryDto(revision: CircuitRevisionEntity): RevisionS
     number: revision.number,
     message: revision.message,
     authorId: revision.authorId,
+    author: toUserRef(revision.author),
     draftVersion: revision.draftVersion,
     createdAt: revision.createdAt.toISOString(),
     lockedAt: revision.lockedAt?.toISOString() ?? null,

@@ -1,12 +1,10 @@
 import type { BuildEntity } from '../builds/build.entity.js';
-import type { UserEntity } from '../users/user.entity.js';
 import type { ReviewAcknowledgementEntity } from './review-acknowledgement.entity.js';
 import type { ReviewEntity } from './review.entity.js';
-import type { AcknowledgementDto, ReviewDecisionDto, ReviewQueueRowDto, UserRefDto } from './dto/review.dto.js';
+import type { AcknowledgementDto, ReviewDecisionDto, ReviewQueueRowDto } from './dto/review.dto.js';
+import { toUserRef } from '../users/user-ref.js';
 
-export function toUserRef(user: UserEntity | null | undefined): UserRefDto | null {
-  return user ? { id: user.id, displayName: user.displayName } : null;
-}
+export { toUserRef };
 
 /** "1974 Redfern Pickup — J. Doe": the vehicle as typed, then the customer; either may be blank. */
 export function buildLabel(build: Pick<BuildEntity, 'vehicleYear' | 'vehicleMake' | 'vehicleModel' | 'customerName'>): string {

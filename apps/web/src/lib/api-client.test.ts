@@ -170,4 +170,68 @@ describe('api client', () => {
       code: 'unexpected_response',
     });
   });
+
+  it('sends extra headers such as If-Match beside the bearer token, and passes a 409 body on', async () => {
+    const mock = createFetchMock().on('PUT', '/api/drafts/1', ({ headers }) =>
+      headers.get('If-Match') === '"3"'
+        ? jsonResponse(200, { ok: true })
+        : errorResponse(409, 'conflict', 'Changed by someone else.', { current: { version: 4 } }),
+    );
+    const client = await signedInClient(mock);
+
+    await expect(
+      client.request('/api/drafts/1', { method: 'PUT', body: {}, headers: { 'If-Match': '"3"' }, schema: pingSchema }),
+    ).resolves.toEqual({ ok: true });
+    const sent = mock.callsTo('PUT', '/api/drafts/1')[0].headers;
+    expect([sent.get('If-Match'), sent.get('Authorization')]).toEqual(['"3"', 'Bearer token-1']);
+
+    const stale = client.request('/api/drafts/1', { method: 'PUT', body: {}, headers: { 'If-Match': '"2"' }, schema: pingSchema });
+    await expect(stale).rejects.toMatchObject({ status: 409, body: { current: { version: 4 } } });
+  });
+
+  it('reads bytes as a blob, refreshing once on 401 like JSON requests', async () => {
+    const png = new Uint8Array([0x89, 0x50, 0x4e, 0x47]);
+    const mock = createFetchMock()
+      .on('GET', '/api/uploads/u-1/content', ({ headers }) =>
+        headers.get('Authorization') === 'Bearer token-2'
+          ? new Response(png, { status: 200, headers: { 'Content-Type': 'image/png' } })
+          : errorResponse(401, 'unauthorized', 'The access token has expired.'),
+      )
+      .on('POST', '/api/auth/refresh', () => jsonResponse(200, sessionBody(user, 'token-2')));
+    const client = await signedInClient(mock);
+
+    const blob = await client.requestBlob('/api/uploads/u-1/content');
+
+    expect(blob.type).toBe('image/png');
+    expect(new Uint8Array(await blob.arrayBuffer())).toEqual(png);
+    expect(mock.callsTo('GET', '/api/uploads/u-1/content').map((r) => r.headers.get('Authorization'))).toEqual([
+      'Bearer token-1',
+      'Bearer token-2',
+    ]);
+  });
+
+  it('throws the API error of a failed blob request', async () => {
+    const mock = createFetchMock().on('GET', '/api/uploads/u-9/content', () => errorResponse(404, 'not_found', 'The upload was not found.'));
+    const client = await signedInClient(mock);
+
+    await expect(client.requestBlob('/api/uploads/u-9/content')).rejects.toMatchObject({
+      status: 404,
+      code: 'not_found',
+      message: 'The upload was not found.',
+    });
+  });
+
+  it('lends the Authorization header to a custom request and retries it once after a refresh', async () => {
+    const mock = createFetchMock().on('POST', '/api/auth/refresh', () => jsonResponse(200, sessionBody(user, 'token-2')));
+    const client = await signedInClient(mock);
+    const seen: Record<string, string>[] = [];
+
+    const result = await client.withAuthorization(async (headers) => {
+      seen.push(headers);
+      return { status: headers.Authorization === 'Bearer token-2' ? 201 : 401 };
+    });
+
+    expect(result.status).toBe(201);
+    expect(seen).toEqual([{ Authorization: 'Bearer token-1' }, { Authorization: 'Bearer token-2' }]);
+  });
 });

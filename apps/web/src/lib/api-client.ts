@@ -1,6 +1,5 @@
 import type { z } from 'zod';
-import { ApiError } from './api-error';
-import { apiErrorBodySchema } from './contract/api-error-body-schema';
+import { ApiError, apiErrorFromText } from './api-error';
 import { authSessionSchema } from './contract/auth-session-schema';
 import type { Me } from './contract/me-schema';
 
@@ -20,6 +19,18 @@ export interface RequestOptions<T> {
   /** Parses the response body; `z.void()`/`z.undefined()` for 204 responses. */
   schema: z.ZodType<T>;
   signal?: AbortSignal;
+  /** Extra request headers, e.g. `If-Match` for a compare-and-set save. */
+  headers?: Record<string, string>;
+}
+
+export interface BlobRequestOptions {
+  signal?: AbortSignal;
+  headers?: Record<string, string>;
+}
+
+/** Anything with an HTTP status: a fetch Response, or what an XMLHttpRequest answered. */
+export interface StatusResult {
+  status: number;
 }
 
 export interface ApiClientOptions {
@@ -29,6 +40,14 @@ export interface ApiClientOptions {
 
 export interface ApiClient {
   request<T>(path: string, options: RequestOptions<T>): Promise<T>;
+  /** GETs bytes (a photo, a spreadsheet) with the session's token; non-2xx throws an ApiError. */
+  requestBlob(path: string, options?: BlobRequestOptions): Promise<Blob>;
+  /**
+   * For requests the helpers above cannot make (e.g. a multipart upload through XMLHttpRequest for
+   * its progress events): runs `attempt` with the Authorization header, and once more with a
+   * refreshed session when it answers 401. The caller reads the result and its errors.
+   */
+  withAuthorization<R extends StatusResult>(attempt: (headers: Record<string, string>) => Promise<R>): Promise<R>;
   signIn(email: string, password: string): Promise<Me>;
   /** Posts to an endpoint that answers like login (accepting an invitation) and adopts that session. */
   signInWith(path: string, body: unknown): Promise<Me>;
@@ -59,10 +78,20 @@ export function createApiClient({ fetchFn, baseUrl = '' }: ApiClientOptions = {}
     return session.status === 'signed-in' ? session.accessToken : null;
   }
 
-  async function send(path: string, method: HttpMethod, body: unknown, token: string | null, signal?: AbortSignal) {
-    const headers: Record<string, string> = { Accept: 'application/json' };
+  function authorizationHeader(token: string | null): Record<string, string> {
+    return token ? { Authorization: `Bearer ${token}` } : {};
+  }
+
+  async function send(
+    path: string,
+    method: HttpMethod,
+    body: unknown,
+    token: string | null,
+    signal?: AbortSignal,
+    extraHeaders: Record<string, string> = {},
+  ) {
+    const headers: Record<string, string> = { Accept: 'application/json', ...extraHeaders, ...authorizationHeader(token) };
     if (body !== undefined) headers['Content-Type'] = 'application/json';
-    if (token) headers.Authorization = `Bearer ${token}`;
     try {
       return await doFetch(`${baseUrl}${path}`, {
         method,
@@ -78,18 +107,8 @@ export function createApiClient({ fetchFn, baseUrl = '' }: ApiClientOptions = {}
   }
 
   async function toApiError(response: Response): Promise<ApiError> {
-    const raw: unknown = await response.json().catch(() => undefined);
-    const parsed = apiErrorBodySchema.safeParse(raw);
-    if (parsed.success) {
-      const { code, message, issues } = parsed.data;
-      return new ApiError({ status: response.status, code, message, issues, body: parsed.data });
-    }
-    return new ApiError({
-      status: response.status,
-      code: 'unexpected_response',
-      message: `The server answered ${response.status} ${response.statusText}`.trim() + '.',
-      body: raw,
-    });
+    const text = await response.text().catch(() => '');
+    return apiErrorFromText(response.status, text, `The server answered ${response.status} ${response.statusText}`.trim() + '.');
   }
 
   async function parseBody<T>(response: Response, schema: z.ZodType<T>): Promise<T> {
@@ -134,21 +153,35 @@ export function createApiClient({ fetchFn, baseUrl = '' }: ApiClientOptions = {}
     return refreshInFlight;
   }
 
-  async function request<T>(path: string, { method = 'GET', body, schema, signal }: RequestOptions<T>): Promise<T> {
+  /** Sends with the current token; on 401 refreshes (single flight) and sends once more; a second 401 ends the session. */
+  async function withToken<R extends StatusResult>(attempt: (token: string | null) => Promise<R>): Promise<R> {
     const tokenUsed = currentToken();
-    let response = await send(path, method, body, tokenUsed, signal);
-    if (response.status === 401 && tokenUsed !== null) {
+    let result = await attempt(tokenUsed);
+    if (result.status === 401 && tokenUsed !== null) {
       // Another request may already have swapped the token while this one was in flight.
       const refreshed = currentToken() !== tokenUsed || (await refreshSession());
-      if (refreshed) response = await send(path, method, body, currentToken(), signal);
-      if (!refreshed || response.status === 401) {
-        const error = await toApiError(response);
-        if (session.status === 'signed-in') setSession({ status: 'signed-out', reason: 'expired' });
-        throw error;
+      if (refreshed) result = await attempt(currentToken());
+      if ((!refreshed || result.status === 401) && session.status === 'signed-in') {
+        setSession({ status: 'signed-out', reason: 'expired' });
       }
     }
+    return result;
+  }
+
+  async function request<T>(path: string, { method = 'GET', body, schema, signal, headers }: RequestOptions<T>): Promise<T> {
+    const response = await withToken((token) => send(path, method, body, token, signal, headers));
     if (!response.ok) throw await toApiError(response);
     return parseBody(response, schema);
+  }
+
+  async function requestBlob(path: string, { signal, headers }: BlobRequestOptions = {}): Promise<Blob> {
+    const response = await withToken((token) => send(path, 'GET', undefined, token, signal, { Accept: '*/*', ...headers }));
+    if (!response.ok) throw await toApiError(response);
+    return response.blob();
+  }
+
+  function withAuthorization<R extends StatusResult>(attempt: (headers: Record<string, string>) => Promise<R>): Promise<R> {
+    return withToken((token) => attempt(authorizationHeader(token)));
   }
 
   async function signIn(email: string, password: string): Promise<Me> {
@@ -182,6 +215,8 @@ export function createApiClient({ fetchFn, baseUrl = '' }: ApiClientOptions = {}
 
   return {
     request,
+    requestBlob,
+    withAuthorization,
     signIn,
     signInWith,
     signOut,

@@ -1,4 +1,5 @@
 import type { CircuitStatus } from '../../circuits/circuit-status.js';
+import type { UserRefDto } from '../../users/user-ref.js';
 import type { BuildStatus } from '../build-status.js';
 
 export interface VehicleDto {
@@ -28,6 +29,8 @@ export interface BuildDto {
   notes: string;
   status: BuildStatus;
   createdById: string | null;
+  /** Null once the account is gone. */
+  createdBy: UserRefDto | null;
   circuitCounts: CircuitCountsDto;
   version: number;
   createdAt: string;

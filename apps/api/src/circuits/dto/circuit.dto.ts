@@ -1,6 +1,7 @@
 import type { Fluid } from '@linesmith/catalog';
 import type { CircuitDocument, CircuitKind } from '@linesmith/routing';
 import type { CircuitStatus } from '../circuit-status.js';
+import type { UserRefDto } from '../../users/user-ref.js';
 
 export interface CircuitDto {
   id: string;
@@ -28,6 +29,8 @@ export interface RevisionSummaryDto {
   number: number;
   message: string;
   authorId: string | null;
+  /** Null once the account is gone. */
+  author: UserRefDto | null;
   /** The draft version the snapshot was taken from. */
   draftVersion: number;
   createdAt: string;

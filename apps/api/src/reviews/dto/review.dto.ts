@@ -3,12 +3,9 @@ import type { CircuitStatus } from '../../circuits/circuit-status.js';
 import type { OpenItems } from '../open-items.js';
 import type { ReviewStatus } from '../review-status.js';
 import type { DocumentRef } from './review-input.schemas.js';
+import type { UserRefDto } from '../../users/user-ref.js';
 
-/** A user as the review screens name them; null where the account is gone. */
-export interface UserRefDto {
-  id: string;
-  displayName: string;
-}
+export type { UserRefDto } from '../../users/user-ref.js';
 
 export interface ReviewQueueRowDto {
   reviewId: string;

@@ -1,6 +1,9 @@
+/**
+ * Raw-request helpers kept for the order-sheet download and the catalogue multipart posts; new
+ * code uses the shared client (`requestBlob`, `withAuthorization`, `headers`) instead.
+ */
 import type { ApiClient } from '../../../lib/api-client';
-import { ApiError } from '../../../lib/api-error';
-import { apiErrorBodySchema } from '../../../lib/contract/api-error-body-schema';
+import { apiErrorFromText } from '../../../lib/api-error';
 import { meSchema } from '../../../lib/contract/me-schema';
 
 /** The access token of the signed-in session, for the requests the JSON client cannot make (multipart, bytes). */
@@ -23,18 +26,4 @@ export async function renewToken(client: ApiClient): Promise<boolean> {
 }
 
 /** An ApiError from a raw error body (text), with the API's message where it sent one. */
-export function apiErrorFrom(status: number, bodyText: string, fallback: string): ApiError {
-  let raw: unknown;
-  try {
-    raw = bodyText ? JSON.parse(bodyText) : undefined;
-  } catch {
-    raw = undefined;
-  }
-  const parsed = apiErrorBodySchema.safeParse(raw);
-  if (parsed.success) {
-    const { code, message, issues } = parsed.data;
-    return new ApiError({ status, code, message, issues, body: parsed.data });
-  }
-  if (status === 413) return new ApiError({ status, code: 'payload_too_large', message: 'The file is larger than the server accepts.' });
-  return new ApiError({ status, code: 'unexpected_response', message: fallback, body: raw });
-}
+export const apiErrorFrom = apiErrorFromText;

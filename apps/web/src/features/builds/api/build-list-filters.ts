@@ -7,7 +7,7 @@ export interface BuildListFilters {
   search: string;
   status: BuildStatus | null;
   sort: BuildSortField;
-  order: SortOrder;
+  direction: SortOrder;
   page: number;
   pageSize: number;
 }
@@ -17,7 +17,7 @@ export const defaultBuildListFilters: BuildListFilters = {
   search: '',
   status: null,
   sort: 'updatedAt',
-  order: 'desc',
+  direction: 'desc',
   page: 1,
   pageSize: 25,
 };

@@ -1,35 +1,22 @@
 import { z } from 'zod';
+import { userRefSchema } from '../../../lib/contract/user-ref-schema';
+import { circuitStatusSchema } from '../../circuits/api/circuit-schema';
 
 export const buildStatusSchema = z.enum(['open', 'on-hold', 'done']);
 export type BuildStatus = z.infer<typeof buildStatusSchema>;
 
 const count = z.number().int().nonnegative();
 
-const flatCountsSchema = z.object({
-  total: count,
-  draft: count,
-  inReview: count,
-  returned: count,
-  approved: count,
-  ordered: count,
-  installed: count,
-});
-export type CircuitCounts = z.infer<typeof flatCountsSchema>;
-
-/** The same counts keyed by circuit status (`{ total, byStatus: { 'in-review': 1, … } }`), as the API also sends them. */
-const byStatusCountsSchema = z
+/**
+ * How many of the build's circuits are in each status (builds list and detail). The API keys them
+ * by circuit status (`{ total, byStatus: { 'in-review': 1, … } }`); screens read them flat.
+ */
+export const circuitCountsSchema = z
   .object({
     total: count,
-    byStatus: z.object({
-      draft: count.default(0),
-      'in-review': count.default(0),
-      returned: count.default(0),
-      approved: count.default(0),
-      ordered: count.default(0),
-      installed: count.default(0),
-    }),
+    byStatus: z.record(circuitStatusSchema, count),
   })
-  .transform(({ total, byStatus }): CircuitCounts => ({
+  .transform(({ total, byStatus }) => ({
     total,
     draft: byStatus.draft,
     inReview: byStatus['in-review'],
@@ -38,62 +25,37 @@ const byStatusCountsSchema = z
     ordered: byStatus.ordered,
     installed: byStatus.installed,
   }));
+export type CircuitCounts = z.output<typeof circuitCountsSchema>;
 
-/** How many of the build's circuits are in each status (builds list and detail). */
-export const circuitCountsSchema = z.union([flatCountsSchema, byStatusCountsSchema]);
-
-const optionalText = z.string().nullish().transform((v) => v ?? '');
-
-/** Free text on the server; a year typed as a number by older clients reads the same. */
-const yearText = z
-  .union([z.string(), z.number().int()])
-  .nullish()
-  .transform((v) => (v === null || v === undefined ? '' : String(v)));
+/** Free text; '' where not known. */
+const text = z.string();
 
 export const vehicleSchema = z.object({
-  year: yearText,
-  make: optionalText,
-  model: optionalText,
-  engine: optionalText,
-  transmission: optionalText,
+  year: text,
+  make: text,
+  model: text,
+  engine: text,
+  transmission: text,
 });
 export type Vehicle = z.infer<typeof vehicleSchema>;
 
-export const customerSchema = z.object({ name: optionalText, phone: optionalText, email: optionalText });
+export const customerSchema = z.object({ name: text, phone: text, email: text });
 export type Customer = z.infer<typeof customerSchema>;
 
-/** Who started the build: the contract's `createdBy`, or only the id where the API sends `createdById`. */
-const createdBySchema = z
-  .looseObject({
-    createdBy: z.object({ id: z.string().min(1), displayName: z.string() }).nullish(),
-    createdById: z.string().nullish(),
-  })
-  .transform(({ createdBy, createdById }) => createdBy ?? (createdById ? { id: createdById, displayName: '' } : null));
-
-/** `Build` of the API contract. Optional text arrives as '' or null; both read as ''. */
-export const buildSchema = z
-  .looseObject({
-    id: z.string().min(1),
-    vehicle: vehicleSchema,
-    customer: customerSchema,
-    notes: optionalText,
-    status: buildStatusSchema,
-    version: z.number().int(),
-    createdAt: z.iso.datetime({ offset: true }),
-    updatedAt: z.iso.datetime({ offset: true }),
-    circuitCounts: circuitCountsSchema,
-  })
-  .and(createdBySchema.transform((createdBy) => ({ createdBy })))
-  .transform(({ id, vehicle, customer, notes, status, version, createdAt, updatedAt, circuitCounts, createdBy }) => ({
-    id,
-    vehicle,
-    customer,
-    notes,
-    status,
-    version,
-    createdAt,
-    updatedAt,
-    circuitCounts,
-    createdBy,
-  }));
+/** `Build` of the API (`BuildDto`). */
+export const buildSchema = z.object({
+  id: z.string().min(1),
+  vehicle: vehicleSchema,
+  customer: customerSchema,
+  notes: text,
+  status: buildStatusSchema,
+  /** Null once the account is gone. */
+  createdBy: userRefSchema.nullable(),
+  version: z.number().int(),
+  createdAt: z.iso.datetime({ offset: true }),
+  updatedAt: z.iso.datetime({ offset: true }),
+  circuitCounts: circuitCountsSchema,
+});
 export type Build = z.output<typeof buildSchema>;
+/** A build as the API sends it (before parsing). */
+export type BuildBody = z.input<typeof buildSchema>;

@@ -7,9 +7,7 @@ import { buildPageSchema } from './build-page-schema';
 export function buildsListQueryOptions(client: ApiClient, filters: BuildListFilters) {
   const params = new URLSearchParams({
     sort: filters.sort,
-    // The contract names the direction `order`; the API as built reads `direction`. Both are sent.
-    order: filters.order,
-    direction: filters.order,
+    direction: filters.direction,
     page: String(filters.page),
     pageSize: String(filters.pageSize),
   });

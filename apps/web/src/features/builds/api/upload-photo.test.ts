@@ -93,7 +93,7 @@ describe('photo upload', () => {
     expect(sent[0].headers.Authorization).toBe('Bearer token-1');
     expect((sent[0].body.get('file') as File).name).toBe('engine-bay.jpg');
     expect(progress).toEqual([0.25, 1, 1]);
-    expect(upload).toMatchObject({ id: 'up-1', width: 4032, height: 3024 });
+    expect(upload).toMatchObject({ id: 'up-1', widthPx: 4032, heightPx: 3024 });
   });
 
   it('renews an expired token once and sends again', async () => {

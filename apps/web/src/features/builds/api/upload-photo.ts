@@ -1,6 +1,5 @@
 import type { ApiClient } from '../../../lib/api-client';
-import { ApiError } from '../../../lib/api-error';
-import { apiErrorFrom, bearerToken, renewToken } from './authorized-request';
+import { ApiError, apiErrorFromText } from '../../../lib/api-error';
 import { uploadSchema, type Upload } from './upload-schema';
 
 export interface UploadPhotoOptions {
@@ -18,12 +17,12 @@ interface RawResult {
 }
 
 /** XMLHttpRequest rather than fetch: only XHR reports upload progress in every browser. */
-function send(path: string, file: File, token: string | null, onProgress: (f: number) => void, signal?: AbortSignal) {
+function send(path: string, file: File, headers: Record<string, string>, onProgress: (f: number) => void, signal?: AbortSignal) {
   return new Promise<RawResult>((resolve, reject) => {
     const xhr = new XMLHttpRequest();
     xhr.open('POST', path);
     xhr.withCredentials = false;
-    if (token) xhr.setRequestHeader('Authorization', `Bearer ${token}`);
+    for (const [name, value] of Object.entries(headers)) xhr.setRequestHeader(name, value);
     xhr.setRequestHeader('Accept', 'application/json');
     xhr.upload.onprogress = (event) => {
       if (event.lengthComputable && event.total > 0) onProgress(event.loaded / event.total);
@@ -42,13 +41,14 @@ function send(path: string, file: File, token: string | null, onProgress: (f: nu
 /** `POST /api/builds/:buildId/uploads` with the file in the `file` field; resolves to the stored upload. */
 export async function uploadPhoto({ client, buildId, file, onProgress, signal }: UploadPhotoOptions): Promise<Upload> {
   const path = `/api/builds/${encodeURIComponent(buildId)}/uploads`;
-  let result = await send(path, file, bearerToken(client), onProgress, signal);
-  if (result.status === 401 && (await renewToken(client))) {
-    onProgress(0);
-    result = await send(path, file, bearerToken(client), onProgress, signal);
-  }
+  let attempts = 0;
+  const result = await client.withAuthorization((headers) => {
+    // A retry after a refreshed session starts the bar again.
+    if (attempts++ > 0) onProgress(0);
+    return send(path, file, headers, onProgress, signal);
+  });
   if (result.status < 200 || result.status >= 300) {
-    throw apiErrorFrom(result.status, result.text, 'The photo could not be uploaded.');
+    throw apiErrorFromText(result.status, result.text, 'The photo could not be uploaded.');
   }
   const parsed = uploadSchema.safeParse(JSON.parse(result.text));
   if (!parsed.success) {

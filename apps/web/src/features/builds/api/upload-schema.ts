@@ -1,37 +1,20 @@
 import { z } from 'zod';
 
-const pixels = z.number().int().nonnegative().nullish();
+const pixels = z.number().int().positive().nullable();
 
-/**
- * `Upload` of the API contract: a stored photo (or price list) with its sniffed type and size.
- * The API as built names the dimensions `widthPx`/`heightPx` and the uploader `uploadedById`;
- * both spellings read the same.
- */
-export const uploadSchema = z
-  .looseObject({
-    id: z.string().min(1),
-    buildId: z.string().min(1).nullable(),
-    kind: z.enum(['photo', 'price-list']),
-    fileName: z.string(),
-    mimeType: z.string(),
-    sizeBytes: z.number().int().nonnegative(),
-    width: pixels,
-    height: pixels,
-    widthPx: pixels,
-    heightPx: pixels,
-    createdAt: z.iso.datetime({ offset: true }),
-  })
-  .transform(({ id, buildId, kind, fileName, mimeType, sizeBytes, width, height, widthPx, heightPx, createdAt }) => ({
-    id,
-    buildId,
-    kind,
-    fileName,
-    mimeType,
-    sizeBytes,
-    width: width ?? widthPx ?? null,
-    height: height ?? heightPx ?? null,
-    createdAt,
-  }));
-export type Upload = z.output<typeof uploadSchema>;
+/** `Upload` of the API: a stored photo (or price list) with its sniffed type, size and, for photos, pixel size. */
+export const uploadSchema = z.object({
+  id: z.string().min(1),
+  buildId: z.string().min(1).nullable(),
+  kind: z.enum(['photo', 'price-list']),
+  fileName: z.string(),
+  mimeType: z.string(),
+  sizeBytes: z.number().int().nonnegative(),
+  widthPx: pixels,
+  heightPx: pixels,
+  uploadedById: z.string().min(1).nullable(),
+  createdAt: z.iso.datetime({ offset: true }),
+});
+export type Upload = z.infer<typeof uploadSchema>;
 
 export const uploadListSchema = z.array(uploadSchema);

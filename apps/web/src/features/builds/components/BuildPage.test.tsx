@@ -6,9 +6,9 @@ import { createFetchMock, errorResponse, jsonResponse } from '../../../test/fetc
 import { renderApp } from '../../../test/render-app';
 import { apiCircuit, checkResult, lineReport } from '../../circuits/test-support/circuit-fixtures';
 import { unitPreferencesStorageKey } from '../../preferences/utils/unit-preferences-store';
-import { apiBuild } from '../test-support/build-fixtures';
+import { apiBuild, noCircuits } from '../test-support/build-fixtures';
 
-const build = apiBuild('b-1', { circuitCounts: { total: 1, draft: 1, inReview: 0, returned: 0, approved: 0, ordered: 0, installed: 0 } });
+const build = apiBuild('b-1', { circuitCounts: { total: 1, byStatus: { ...noCircuits.byStatus, draft: 1 } } });
 
 function buildApi() {
   return createFetchMock()

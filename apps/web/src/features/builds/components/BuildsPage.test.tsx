@@ -4,18 +4,18 @@ import { describe, expect, it } from 'vitest';
 import { demoUsers } from '../../../test/demo-users';
 import { createFetchMock, errorResponse, jsonResponse } from '../../../test/fetch-mock';
 import { renderApp } from '../../../test/render-app';
-import type { Build } from '../api/build-schema';
+import type { BuildBody } from '../api/build-schema';
 import { apiBuild } from '../test-support/build-fixtures';
 
 // Expected requests and answers: the builds API contract (`GET /api/builds?search=&status=&sort=
-// &order=&page=&pageSize=` → `{ items, total, page, pageSize }`).
+// &direction=&page=&pageSize=` → `{ items, total, page, pageSize }`).
 const customers = ['Corliss Ambry', 'Tamsin Voller', 'Odell Pryce', 'Nadia Hurst', 'Ivo Brennick'];
-const allBuilds: Build[] = customers.map((name, i) =>
+const allBuilds: BuildBody[] = customers.map((name, i) =>
   apiBuild(`b-${i + 1}`, { customer: { name, phone: '', email: '' }, vehicle: { year: String(1970 + i), make: 'Harlan', model: `Model ${i + 1}`, engine: '', transmission: '' } }),
 );
 
 /** A builds API over an in-memory list, searching and paging like the contract says. */
-function buildsApi(builds: Build[] = allBuilds) {
+function buildsApi(builds: BuildBody[] = allBuilds) {
   return createFetchMock().on('GET', '/api/builds', ({ url }) => {
     const search = url.searchParams.get('search')?.toLowerCase() ?? '';
     const page = Number(url.searchParams.get('page'));
@@ -43,7 +43,7 @@ describe('Builds table', () => {
 
     expect(await customerColumn()).toEqual(customers);
     const first = fetchMock.callsTo('GET', '/api/builds')[0].url.searchParams;
-    expect(Object.fromEntries(first)).toEqual({ sort: 'updatedAt', order: 'desc', direction: 'desc', page: '1', pageSize: '25' });
+    expect(Object.fromEntries(first)).toEqual({ sort: 'updatedAt', direction: 'desc', page: '1', pageSize: '25' });
 
     const user = userEvent.setup();
     await user.keyboard('/');
@@ -81,7 +81,7 @@ describe('Builds table', () => {
 
     const lastSort = () => {
       const params = fetchMock.callsTo('GET', '/api/builds').at(-1)!.url.searchParams;
-      return `${params.get('sort')} ${params.get('order')}`;
+      return `${params.get('sort')} ${params.get('direction')}`;
     };
     await user.click(screen.getByRole('button', { name: 'Customer' }));
     await waitFor(() => expect(lastSort()).toBe('customer asc'));

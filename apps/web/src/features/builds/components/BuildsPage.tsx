@@ -44,13 +44,13 @@ export function BuildsPage() {
   const [search, setSearch] = useState('');
   const [status, setStatus] = useState<BuildStatus | null>(null);
   const [sort, setSort] = useState<BuildSortField>(defaultBuildListFilters.sort);
-  const [order, setOrder] = useState<SortOrder>(defaultBuildListFilters.order);
+  const [order, setOrder] = useState<SortOrder>(defaultBuildListFilters.direction);
   const [page, setPage] = useState(1);
   const [creating, setCreating] = useState(false);
   const debouncedSearch = useDebouncedValue(search);
   useSlashToFocus(searchRef);
 
-  const filters = { ...defaultBuildListFilters, search: debouncedSearch, status, sort, order, page };
+  const filters = { ...defaultBuildListFilters, search: debouncedSearch, status, sort, direction: order, page };
   const { data, isPending, isError, error, refetch, isFetching } = useBuildsList(filters);
   const pageCount = data ? Math.max(1, Math.ceil(data.total / data.pageSize)) : 1;
   const filtered = debouncedSearch.trim() !== '' || status !== null;

@@ -39,7 +39,7 @@ const useStyles = makeStyles({
 export function PhotoThumbnail({ upload, onDelete }: PhotoThumbnailProps) {
   const styles = useStyles();
   const image = useUploadBlobUrl(upload.id);
-  const size = upload.width && upload.height ? `${upload.width} × ${upload.height} px · ` : '';
+  const size = upload.widthPx && upload.heightPx ? `${upload.widthPx} × ${upload.heightPx} px · ` : '';
   return (
     <figure className={styles.figure}>
       <div className={styles.frame}>

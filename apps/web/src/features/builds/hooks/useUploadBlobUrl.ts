@@ -1,10 +1,12 @@
 import { useEffect, useState } from 'react';
 import { useApiClient } from '../../../lib/useApiClient';
-import { fetchUploadBlob } from '../api/fetch-upload-blob';
 
 export type BlobUrlState = { status: 'loading' } | { status: 'ready'; url: string } | { status: 'error'; message: string };
 
-/** An object URL for an upload's bytes, revoked when the component unmounts or the id changes. */
+/**
+ * An object URL for an upload's bytes (`GET /api/uploads/:id/content` needs the bearer token, so
+ * no plain <img src>), revoked when the component unmounts or the id changes.
+ */
 export function useUploadBlobUrl(uploadId: string): BlobUrlState {
   const client = useApiClient();
   const [state, setState] = useState<BlobUrlState>({ status: 'loading' });
@@ -12,7 +14,8 @@ export function useUploadBlobUrl(uploadId: string): BlobUrlState {
     const controller = new AbortController();
     let url: string | null = null;
     setState({ status: 'loading' });
-    fetchUploadBlob(client, uploadId, controller.signal)
+    client
+      .requestBlob(`/api/uploads/${encodeURIComponent(uploadId)}/content`, { signal: controller.signal })
       .then((blob) => {
         if (controller.signal.aborted) return;
         url = URL.createObjectURL(blob);

@@ -1,9 +1,12 @@
-import type { Build } from '../api/build-schema';
+import type { BuildBody } from '../api/build-schema';
 
-const noCircuits = { total: 0, draft: 0, inReview: 0, returned: 0, approved: 0, ordered: 0, installed: 0 };
+export const noCircuits = {
+  total: 0,
+  byStatus: { draft: 0, 'in-review': 0, returned: 0, approved: 0, ordered: 0, installed: 0 },
+};
 
-/** A build as the API sends it (API contract, `Build`); invented demo vehicle and customer. */
-export function apiBuild(id: string, extra: Partial<Build> = {}): Build {
+/** A build as the API sends it (`BuildDto`); invented demo vehicle and customer. */
+export function apiBuild(id: string, extra: Partial<BuildBody> = {}): BuildBody {
   return {
     id,
     vehicle: { year: '1976', make: 'Harlan', model: 'Half-ton pickup', engine: '6.2 L V8', transmission: '4-speed automatic' },

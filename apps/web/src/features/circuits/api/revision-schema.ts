@@ -1,17 +1,14 @@
 import type { CircuitDocument } from '@linesmith/routing';
 import { z } from 'zod';
+import { userRefSchema, type UserRef } from '../../../lib/contract/user-ref-schema';
 import { circuitDocumentField } from './circuit-document-field';
 
-/**
- * A revision's header. The contract sends `author: { id, displayName }`; the API as built sends
- * only `authorId`, read here as an author without a name.
- */
+/** A revision's header; `author` is null once the account is gone. */
 const revisionFields = {
   id: z.string().min(1),
   number: z.number().int().positive(),
   message: z.string().nullish().transform((v) => v ?? ''),
-  author: z.object({ id: z.string().min(1), displayName: z.string() }).nullish(),
-  authorId: z.string().nullish(),
+  author: userRefSchema.nullable(),
   createdAt: z.iso.datetime({ offset: true }),
 };
 
@@ -19,7 +16,7 @@ export interface RevisionSummary {
   id: string;
   number: number;
   message: string;
-  author: { id: string; displayName: string } | null;
+  author: UserRef | null;
   createdAt: string;
 }
 
@@ -31,7 +28,7 @@ const summaryOf = (raw: z.output<z.ZodObject<typeof revisionFields>>): RevisionS
   id: raw.id,
   number: raw.number,
   message: raw.message,
-  author: raw.author ?? (raw.authorId ? { id: raw.authorId, displayName: '' } : null),
+  author: raw.author,
   createdAt: raw.createdAt,
 });
 

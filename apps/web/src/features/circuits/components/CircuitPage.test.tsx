@@ -47,7 +47,7 @@ describe('circuit page', () => {
   });
 
   it('lists the revisions and opens one read-only with its summary and its check', async () => {
-    const revision = { id: 'r-1', circuitId: 'c-1', number: 1, message: 'First fit-up', authorId: 'u-fab', draftVersion: 2, createdAt: '2026-01-06T10:00:00.000Z' };
+    const revision = { id: 'r-1', circuitId: 'c-1', number: 1, message: 'First fit-up', authorId: 'u-fab', author: { id: 'u-fab', displayName: 'Rafe Okonkwo' }, draftVersion: 2, createdAt: '2026-01-06T10:00:00.000Z' };
     const fetchMock = circuitApi([23.6875])
       .on('GET', '/api/circuits/c-1/revisions', () => jsonResponse(200, [revision]))
       .on('GET', '/api/circuits/c-1/revisions/1', () => jsonResponse(200, { ...revision, document: coolerDraft }))

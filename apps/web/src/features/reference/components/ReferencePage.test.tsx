@@ -1,4 +1,4 @@
-import { families, familyLabel, identifyThread, threadReadingSchema, threadTable, type Family } from '@linesmith/catalog';
+import { families, familyLabel, identifyThread, listSizes, threadReadingSchema, threadTable, type Family } from '@linesmith/catalog';
 import { inToMm, ruleRegistry } from '@linesmith/routing';
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
@@ -14,14 +14,16 @@ import { renderApp } from '../../../test/render-app';
 function referenceApi() {
   return createFetchMock()
     .on('GET', '/api/reference/families', () =>
-      jsonResponse(200, families.map((family) => ({ family, label: familyLabel(family) }))),
+      jsonResponse(200, families.map((family) => ({ family, label: familyLabel(family), sizes: listSizes(family) }))),
     )
     .on('GET', '/api/reference/threads', ({ url }) => {
+      // The API lists tables, filtered to the family asked for.
       const family = url.searchParams.get('family') as Family;
-      const rows = threadTable(family);
-      return jsonResponse(200, { family, label: familyLabel(family), source: rows[0].source, rows });
+      return jsonResponse(200, [{ family, label: familyLabel(family), rows: threadTable(family) }]);
     })
-    .on('POST', '/api/reference/identify', ({ body }) => jsonResponse(200, identifyThread(threadReadingSchema.parse(body))))
+    .on('POST', '/api/reference/identify', ({ body }) =>
+      jsonResponse(200, { candidates: identifyThread(threadReadingSchema.parse(body)) }),
+    )
     .on('GET', '/api/reference/rules', () =>
       jsonResponse(
         200,
@@ -202,7 +204,7 @@ describe('Reference › Thread identifier', () => {
   });
 
   it('says so when nothing matches, and shows the API error when the lookup fails', async () => {
-    const fetchMock = referenceApi().on('POST', '/api/reference/identify', () => jsonResponse(200, []));
+    const fetchMock = referenceApi().on('POST', '/api/reference/identify', () => jsonResponse(200, { candidates: [] }));
     openReference('identify', fetchMock);
     const user = userEvent.setup();
     await user.type(await screen.findByRole('textbox', { name: /Threads per inch/ }), '40');

@@ -40,7 +40,6 @@ export function ThreadTableView({ table, unit }: ThreadTableViewProps) {
   const majorHeader =
     table.family === 'barb' ? 'Hose inside diameter' : table.family === 'npt' ? 'Pipe OD' : 'Major diameter';
   const sourceGroups = groupRowSources(rows);
-  const rowSourcesDiffer = sourceGroups.length > 1 || (sourceGroups[0] && sourceGroups[0].source !== table.source);
 
   return (
     <div className={styles.root}>
@@ -76,10 +75,11 @@ export function ThreadTableView({ table, unit }: ThreadTableViewProps) {
           ))}
         </TableBody>
       </Table>
-      <Text size={200} as="p">
-        Source: {table.source}
-      </Text>
-      {rowSourcesDiffer && (
+      {sourceGroups.length === 1 ? (
+        <Text size={200} as="p">
+          Source: {sourceGroups[0]!.source}
+        </Text>
+      ) : (
         <ul className={styles.sources} aria-label="Sources by size">
           {sourceGroups.map((group) => (
             <li key={group.source}>

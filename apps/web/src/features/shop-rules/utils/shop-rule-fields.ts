@@ -13,8 +13,7 @@ export type ShopRuleFieldId =
   | 'slackPercent'
   | 'restrictionRatio'
   | 'cutRoundingIn'
-  | 'trimAllowanceIn'
-  | 'taxRatePercent';
+  | 'trimAllowanceIn';
 
 export interface ShopRuleField {
   id: ShopRuleFieldId;
@@ -108,14 +107,6 @@ export const shopRuleFields: readonly ShopRuleField[] = [
     label: 'Trim allowance per cut',
     help: 'Extra hose ordered per cut for squaring the ends.',
     unit: 'in',
-  },
-  {
-    id: 'taxRatePercent',
-    rule: 'taxRatePercent',
-    path: ['taxRatePercent'],
-    label: 'Sales tax rate',
-    help: 'Applied to order sheets.',
-    unit: 'percent',
   },
 ];
 
