@@ -21,7 +21,7 @@ describe('revision comparison', () => {
     const fetchMock = createFetchMock()
       .on('GET', '/api/circuits/c-1', () => jsonResponse(200, apiCircuit('c-1')))
       .on('GET', '/api/circuits/c-1/revisions', () =>
-        jsonResponse(200, [1, 2].map((n) => ({ id: `r-${n}`, number: n, message: '', authorId: 'u-fab', createdAt: '2026-01-06T10:00:00.000Z' }))),
+        jsonResponse(200, [1, 2].map((n) => ({ id: `r-${n}`, number: n, message: '', author: { id: 'u-fab', displayName: 'Rafe Okonkwo' }, createdAt: '2026-01-06T10:00:00.000Z' }))),
       )
       .on('GET', '/api/circuits/c-1/compare', () => jsonResponse(200, { comparison, before, after: next }));
     renderApp({ path: '/circuits/c-1/compare?from=1&to=2', user: demoUsers.reviewer, fetchMock });

@@ -1,4 +1,4 @@
-import { Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Tooltip, makeStyles, tokens } from '@fluentui/react-components';
+import { Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, makeStyles, tokens } from '@fluentui/react-components';
 import { Link, useNavigate } from 'react-router-dom';
 import { SeverityLabel } from '../../reference/components/SeverityLabel';
 import { formatDateTime } from '../../users/utils/format-date-time';
@@ -44,11 +44,10 @@ export function ReviewQueueTable({ rows }: ReviewQueueTableProps) {
             <TableCell>{personName(row.fabricator)}</TableCell>
             <TableCell>{row.revisionNumber}</TableCell>
             <TableCell>
-              <Tooltip content={formatDateTime(row.submittedAt)} relationship="description">
-                <time dateTime={row.submittedAt} tabIndex={0}>
-                  {relativeTime(row.submittedAt)}
-                </time>
-              </Tooltip>
+              {/* A native tooltip: the absolute time on hover, without a portal over the table. */}
+              <time dateTime={row.submittedAt} title={formatDateTime(row.submittedAt)}>
+                {relativeTime(row.submittedAt)}
+              </time>
             </TableCell>
             <TableCell>
               <span className={styles.counts}>

@@ -42,6 +42,13 @@ export function SheetCutList({ document, evaluation, parts }: SheetCutListProps)
         </tr>
       </thead>
       <tbody>
+        {evaluation.lines.length === 0 && (
+          <tr>
+            <td className={c} colSpan={8}>
+              No lines drawn in this revision.
+            </td>
+          </tr>
+        )}
         {evaluation.lines.map((report) => {
           const index = document.lines.findIndex((l) => l.id === report.lineId);
           const line = document.lines[index];

@@ -7,7 +7,7 @@ import { apiBuild } from '../../builds/test-support/build-fixtures';
 import { apiCircuit, coolerDraft } from '../../circuits/test-support/circuit-fixtures';
 import { evaluationWith } from '../../reviews/test-support/review-fixtures';
 
-const revision = { id: 'r-2', number: 2, message: 'Submitted', authorId: 'u-fab', createdAt: '2026-01-06T10:00:00.000Z', document: coolerDraft };
+const revision = { id: 'r-2', number: 2, message: 'Submitted', author: { id: 'u-fab', displayName: 'Rafe Okonkwo' }, createdAt: '2026-01-06T10:00:00.000Z', document: coolerDraft };
 const submitted = { action: 'submitted', actor: { id: 'u-fab', displayName: 'Rafe Okonkwo' }, revisionNumber: 2, details: null, at: '2026-01-07T09:00:00.000Z' };
 const approved = { action: 'approved', actor: { id: 'u-lead', displayName: 'Hollis Brandt' }, revisionNumber: 2, details: null, at: '2026-01-07T11:00:00.000Z' };
 

@@ -58,7 +58,8 @@ export function ShopSheetPage() {
           Back to the circuit
         </Link>
       </div>
-      <header data-sheet-section>
+      {/* Not a <header>: print hides the app's top bar by that element. */}
+      <div data-sheet-section>
         <Text as="h1" id="sheet-title" size={700} weight="semibold">
           Shop sheet: {c.name} — revision {revision}
         </Text>
@@ -73,7 +74,7 @@ export function ShopSheetPage() {
             Max: {formatPressure(doc.circuit.maxPressurePsi, 'psi')} · {formatTemperature(doc.circuit.maxTempF, 'F')}
           </span>
         </Text>
-      </header>
+      </div>
       <SignOffBlock revision={revision} signOff={signOff} />
       <section aria-label="Sketch" data-sheet-section>
         <div className={styles.sketch}>
