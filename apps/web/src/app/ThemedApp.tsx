@@ -10,6 +10,8 @@ export interface ThemedAppProps {
   initialScheme?: ColorScheme;
 }
 
+// The layout lives on an inner element: Fluent copies the provider's className onto the portal
+// layer that pop-ups open into, where a full-height box would cover the page.
 const useStyles = makeStyles({
   root: { minHeight: '100vh', display: 'flex', flexDirection: 'column' },
 });
@@ -26,8 +28,8 @@ export function ThemedApp({ children, initialScheme }: ThemedAppProps) {
 
   return (
     <ColorSchemeContext.Provider value={value}>
-      <FluentProvider theme={scheme === 'dark' ? linesmithDarkTheme : linesmithLightTheme} className={styles.root}>
-        {children}
+      <FluentProvider theme={scheme === 'dark' ? linesmithDarkTheme : linesmithLightTheme}>
+        <div className={styles.root}>{children}</div>
       </FluentProvider>
     </ColorSchemeContext.Provider>
   );
