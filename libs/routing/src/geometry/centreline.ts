@@ -1,5 +1,4 @@
 import type { Vec } from './vec.js';
-import { distance } from './vec.js';
 
 const SAME_POINT = 1e-9;
 const TOLERANCE = 1e-9;
@@ -37,7 +36,8 @@ export interface CentrelineDetail {
  * When the bends do not fit, `lengthIn` is the sharp-cornered length (an upper bound).
  */
 export function centrelineDetail(pointsIn: readonly Vec[], bendRadiiIn: readonly number[]): CentrelineDetail {
-  // Written with plain loops and locals: a large circuit runs this over thousands of corners per evaluation.
+  // Written with plain loops, locals and distances written out (a call V8 does not inline boxes
+  // the number it returns): a large circuit runs this over thousands of corners per evaluation.
   const points: Vec[] = [];
   const pointIndices: number[] = [];
   const radii: number[] = [];
@@ -45,7 +45,9 @@ export function centrelineDetail(pointsIn: readonly Vec[], bendRadiiIn: readonly
     const p = pointsIn[i];
     const r = Math.max(0, bendRadiiIn[i] ?? 0);
     const last = points.length - 1;
-    if (last >= 0 && distance(points[last], p) < SAME_POINT) {
+    const gx = last >= 0 ? points[last].x - p.x : 0;
+    const gy = last >= 0 ? points[last].y - p.y : 0;
+    if (last >= 0 && Math.sqrt(gx * gx + gy * gy) < SAME_POINT) {
       if (r > radii[last]) radii[last] = r;
       continue;
     }
@@ -57,7 +59,9 @@ export function centrelineDetail(pointsIn: readonly Vec[], bendRadiiIn: readonly
   const legsIn: number[] = [];
   let sharpIn = 0;
   for (let i = 0; i < n - 1; i++) {
-    const leg = distance(points[i], points[i + 1]);
+    const dx = points[i + 1].x - points[i].x;
+    const dy = points[i + 1].y - points[i].y;
+    const leg = Math.sqrt(dx * dx + dy * dy);
     legsIn.push(leg);
     sharpIn += leg;
   }

@@ -1,4 +1,4 @@
-import type { Vec } from './vec.js';
+import { norm, type Vec } from './vec.js';
 import type { CentrelineDetail } from './centreline.js';
 
 /** Largest angle one chord of a bend may span when a bend is drawn as straight pieces. */
@@ -36,7 +36,7 @@ export function routePath(detail: CentrelineDetail): RoutePath {
     count++;
   };
   const lineTo = (x: number, y: number) => {
-    const d = Math.hypot(x - xs[count - 1], y - ys[count - 1]);
+    const d = norm(x - xs[count - 1], y - ys[count - 1]);
     if (d > 1e-12) push(x, y, d);
   };
   if (corners.length === 0) return { xs, ys, s, count: 0, lengthIn: 0 };
@@ -50,8 +50,8 @@ export function routePath(detail: CentrelineDetail): RoutePath {
     }
     const prev = corners[i - 1];
     const next = corners[i + 1];
-    const inLen = Math.hypot(corner.x - prev.x, corner.y - prev.y);
-    const outLen = Math.hypot(next.x - corner.x, next.y - corner.y);
+    const inLen = norm(corner.x - prev.x, corner.y - prev.y);
+    const outLen = norm(next.x - corner.x, next.y - corner.y);
     const ix = (corner.x - prev.x) / inLen;
     const iy = (corner.y - prev.y) / inLen;
     const ox = (next.x - corner.x) / outLen;
@@ -100,7 +100,7 @@ export function distanceAlong(path: RoutePath, p: Vec): number {
     const aby = ys[i + 1] - ys[i];
     const lenSq = abx * abx + aby * aby;
     const t = lenSq === 0 ? 0 : Math.max(0, Math.min(1, ((p.x - xs[i]) * abx + (p.y - ys[i]) * aby) / lenSq));
-    const d = Math.hypot(p.x - (xs[i] + abx * t), p.y - (ys[i] + aby * t));
+    const d = norm(p.x - (xs[i] + abx * t), p.y - (ys[i] + aby * t));
     if (d < best) {
       best = d;
       bestS = s[i] + t * (s[i + 1] - s[i]);

@@ -1,5 +1,5 @@
 import type { Vec } from './vec.js';
-import { cross, distance, dot, sub } from './vec.js';
+import { cross, distance, dot, norm, sub } from './vec.js';
 
 const EPS = 1e-12;
 
@@ -9,7 +9,7 @@ export function pointSegmentDistance(p: Vec, a: Vec, b: Vec): number {
   const lenSq = dot(ab, ab);
   if (lenSq < EPS) return distance(p, a);
   const t = Math.max(0, Math.min(1, dot(sub(p, a), ab) / lenSq));
-  return Math.hypot(a.x + ab.x * t - p.x, a.y + ab.y * t - p.y);
+  return norm(a.x + ab.x * t - p.x, a.y + ab.y * t - p.y);
 }
 
 /**
@@ -58,18 +58,39 @@ export function segmentSegmentDistance(a: Vec, b: Vec, c: Vec, d: Vec): number {
  * of the stretches inside the two end discs and inside the slab along ef.
  */
 export function segmentWithinCapsule(a: Vec, b: Vec, e: Vec, f: Vec, radius: number): [number, number] | null {
-  const dx = b.x - a.x;
-  const dy = b.y - a.y;
+  const range = new Float64Array(2);
+  const found = chordWithinCapsule(Float64Array.of(a.x, a.y, b.x, b.y), Float64Array.of(e.x, e.y, f.x, f.y, radius), range);
+  return found ? [range[0], range[1]] : null;
+}
+
+/**
+ * segmentWithinCapsule on flat arrays: `chord` is [ax, ay, bx, by], `capsule` is [ex, ey, fx, fy,
+ * radius]; the interval goes into `out` (true when there is one). The heat check runs this on
+ * thousands of chords per evaluation: numbers passed one by one would be boxed on every call.
+ */
+export function chordWithinCapsule(chord: Float64Array, capsule: Float64Array, out: Float64Array): boolean {
+  const ax = chord[0];
+  const ay = chord[1];
+  const dx = chord[2] - ax;
+  const dy = chord[3] - ay;
+  const ex = capsule[0];
+  const ey = capsule[1];
+  const fx = capsule[2];
+  const fy = capsule[3];
+  const radius = capsule[4];
   let lo = Infinity;
   let hi = -Infinity;
   // The two end discs: |a + t·d − centre|² ≤ r², a quadratic in t.
   const qa = dx * dx + dy * dy;
-  for (const c of [e, f]) {
-    const mx = a.x - c.x;
-    const my = a.y - c.y;
+  for (let k = 0; k < 2; k++) {
+    const mx = ax - (k === 0 ? ex : fx);
+    const my = ay - (k === 0 ? ey : fy);
     const qc = mx * mx + my * my - radius * radius;
     if (qa < EPS) {
-      if (qc <= 0) [lo, hi] = [Math.min(lo, 0), Math.max(hi, 1)];
+      if (qc <= 0) {
+        lo = Math.min(lo, 0);
+        hi = Math.max(hi, 1);
+      }
       continue;
     }
     const qb = 2 * (mx * dx + my * dy);
@@ -80,29 +101,37 @@ export function segmentWithinCapsule(a: Vec, b: Vec, e: Vec, f: Vec, radius: num
     hi = Math.max(hi, (-qb + root) / (2 * qa));
   }
   // The slab: 0 ≤ along ≤ |ef| and |across| ≤ r in ef's own frame, both linear in t.
-  const ex = f.x - e.x;
-  const ey = f.y - e.y;
-  const len = Math.hypot(ex, ey);
+  const len = Math.sqrt((fx - ex) * (fx - ex) + (fy - ey) * (fy - ey));
   if (len >= EPS) {
-    const ux = ex / len;
-    const uy = ey / len;
-    const mx = a.x - e.x;
-    const my = a.y - e.y;
-    const slab = clipRange(mx * ux + my * uy, dx * ux + dy * uy, 0, len, -Infinity, Infinity);
-    const both = slab && clipRange(-mx * uy + my * ux, -dx * uy + dy * ux, -radius, radius, slab[0], slab[1]);
-    if (both) [lo, hi] = [Math.min(lo, both[0]), Math.max(hi, both[1])];
+    const ux = (fx - ex) / len;
+    const uy = (fy - ey) / len;
+    const mx = ax - ex;
+    const my = ay - ey;
+    out[0] = -Infinity;
+    out[1] = Infinity;
+    if (
+      clipInto(mx * ux + my * uy, dx * ux + dy * uy, 0, len, out) &&
+      clipInto(-mx * uy + my * ux, -dx * uy + dy * ux, -radius, radius, out)
+    ) {
+      lo = Math.min(lo, out[0]);
+      hi = Math.max(hi, out[1]);
+    }
   }
   lo = Math.max(0, lo);
   hi = Math.min(1, hi);
-  return lo <= hi ? [lo, hi] : null;
+  out[0] = lo;
+  out[1] = hi;
+  return lo <= hi;
 }
 
-/** Narrows [lo, hi] to the t where min ≤ v0 + t·dv ≤ max; null when nothing is left. */
-function clipRange(v0: number, dv: number, min: number, max: number, lo: number, hi: number): [number, number] | null {
-  if (Math.abs(dv) < EPS) return v0 >= min && v0 <= max ? [lo, hi] : null;
+/** Narrows [out[0], out[1]] to the t where min ≤ v0 + t·dv ≤ max; false when nothing is left. */
+function clipInto(v0: number, dv: number, min: number, max: number, out: Float64Array): boolean {
+  if (Math.abs(dv) < EPS) return v0 >= min && v0 <= max;
   const t0 = (min - v0) / dv;
   const t1 = (max - v0) / dv;
-  const from = Math.max(lo, Math.min(t0, t1));
-  const to = Math.min(hi, Math.max(t0, t1));
-  return from <= to ? [from, to] : null;
+  const from = Math.max(out[0], Math.min(t0, t1));
+  const to = Math.min(out[1], Math.max(t0, t1));
+  out[0] = from;
+  out[1] = to;
+  return from <= to;
 }

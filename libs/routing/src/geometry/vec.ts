@@ -10,8 +10,13 @@ export const sub = (a: Vec, b: Vec): Vec => ({ x: a.x - b.x, y: a.y - b.y });
 export const scale = (a: Vec, k: number): Vec => ({ x: a.x * k, y: a.y * k });
 export const dot = (a: Vec, b: Vec): number => a.x * b.x + a.y * b.y;
 export const cross = (a: Vec, b: Vec): number => a.x * b.y - a.y * b.x;
-export const length = (a: Vec): number => Math.hypot(a.x, a.y);
-export const distance = (a: Vec, b: Vec): number => Math.hypot(a.x - b.x, a.y - b.y);
+/**
+ * √(dx² + dy²). Not Math.hypot: V8 does not inline it and boxes its arguments, which makes it the
+ * largest source of garbage in a circuit evaluation; sketch and inch values cannot overflow here.
+ */
+export const norm = (dx: number, dy: number): number => Math.sqrt(dx * dx + dy * dy);
+export const length = (a: Vec): number => norm(a.x, a.y);
+export const distance = (a: Vec, b: Vec): number => norm(a.x - b.x, a.y - b.y);
 export const lerp = (a: Vec, b: Vec, t: number): Vec => ({ x: a.x + (b.x - a.x) * t, y: a.y + (b.y - a.y) * t });
 
 /** Unit vector of a; the zero vector stays zero. */

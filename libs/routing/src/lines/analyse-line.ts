@@ -40,6 +40,9 @@ export interface LineEnvironment {
   mate: Mater;
 }
 
+/** Relative length difference below which the path and the drawn basis count as the same length. */
+const STRETCH_NOISE = 1e-12;
+
 export const portKey = (unitId: string, portId: string): string => `${unitId}/${portId}`;
 
 /** Works out one line: its route, end stacks, cut length, supports and heat exposure. */
@@ -60,11 +63,19 @@ export function analyseLine(line: CircuitLine, env: LineEnvironment): LineAnalys
   let drawnLengthIn: number | null = null;
   if (env.pxPerIn !== null && from && to) {
     const perIn = env.pxPerIn;
+    // Plain loops: this runs for every line of every evaluation.
     const routeIn: PointIn[] = [pointPxToIn(from.positionPx, perIn)];
-    for (const p of line.points) routeIn.push(pointIn(p.x / perIn, p.y / perIn));
+    const radii: number[] = [0];
+    for (const p of line.points) {
+      routeIn.push(pointIn(p.x / perIn, p.y / perIn));
+      radii.push(p.bendRadiusIn);
+    }
     routeIn.push(pointPxToIn(to.positionPx, perIn));
-    centreline = centrelineDetail(routeIn, [0, ...line.points.map((p) => p.bendRadiusIn), 0]);
-    drawnLengthIn = routeIn.slice(1).reduce((sum, p, i) => sum + distance(routeIn[i], p), 0);
+    radii.push(0);
+    centreline = centrelineDetail(routeIn, radii);
+    let drawn = 0;
+    for (let i = 1; i < routeIn.length; i++) drawn += distance(routeIn[i - 1], routeIn[i]);
+    drawnLengthIn = drawn;
   }
   const measuredLengthIn = line.measuredLengthIn ?? null;
   const centrelineIn = centreline?.lengthIn ?? null;
@@ -93,7 +104,8 @@ export function analyseLine(line: CircuitLine, env: LineEnvironment): LineAnalys
   const path = centreline ? routePath(centreline) : null;
   const rawHeat = path ? heatExposure(path, env.zones, rules.sleeveOverlapIn) : null;
   const stretch = path && basisIn !== null && path.lengthIn > 0 ? basisIn / path.lengthIn : 1;
-  const heat = rawHeat && stretch !== 1 ? stretchHeat(rawHeat, stretch) : rawHeat;
+  // A drawn basis equals the path length up to rounding: only a real stretch is worth new intervals.
+  const heat = rawHeat && Math.abs(stretch - 1) > STRETCH_NOISE ? stretchHeat(rawHeat, stretch) : rawHeat;
 
   const lengthForSupports = basisIn ?? 0;
   const supportsAt = line.supports.map((s) => ({ id: s.id, atIn: s.atIn }));

@@ -1,7 +1,7 @@
 import type { Vec } from '../geometry/vec.js';
 import { pathBounds, type RoutePath } from '../geometry/route-path.js';
 import { boundingBox, boxesOverlap, segmentInsidePolygon, type Box } from '../geometry/polygon.js';
-import { segmentWithinCapsule } from '../geometry/segment.js';
+import { chordWithinCapsule } from '../geometry/segment.js';
 import { clampIntervals, growIntervals, mergeIntervals, type Interval } from '../geometry/intervals.js';
 
 export interface HeatZoneIn {
@@ -28,8 +28,8 @@ export interface HeatExposure {
 }
 
 interface PreparedEdge {
-  e: Vec;
-  f: Vec;
+  /** [ex, ey, fx, fy, clearance] for chordWithinCapsule. */
+  capsule: Float64Array;
   /** The edge's box grown by the clearance: chords outside it cannot come near this edge. */
   box: Box;
 }
@@ -48,15 +48,22 @@ export const prepareZones = (zones: readonly HeatZoneIn[]): PreparedZone[] =>
     box: boundingBox(z.polygon, z.clearanceIn),
     edges: z.polygon.map((e, i) => {
       const f = z.polygon[(i + 1) % z.polygon.length];
-      return { e, f, box: boundingBox([e, f], z.clearanceIn) };
+      return { capsule: Float64Array.of(e.x, e.y, f.x, f.y, z.clearanceIn), box: boundingBox([e, f], z.clearanceIn) };
     }),
   }));
 
-const chordMisses = (ax: number, ay: number, bx: number, by: number, box: Box): boolean =>
-  (ax > bx ? ax : bx) < box.minX ||
-  (ax < bx ? ax : bx) > box.maxX ||
-  (ay > by ? ay : by) < box.minY ||
-  (ay < by ? ay : by) > box.maxY;
+/**
+ * Appends [start, end], widening the last interval instead when it starts within it: stretches
+ * arrive roughly in route order, so this keeps the list short; mergeIntervals finishes the union.
+ */
+function addNear(near: Interval[], start: number, end: number): void {
+  const last = near.length > 0 ? near[near.length - 1] : undefined;
+  if (last && start >= last.start && start <= last.end) {
+    if (end > last.end) last.end = end;
+  } else {
+    near.push({ start, end });
+  }
+}
 
 /** Heat exposure of one route against the circuit's heat zones (all in inches). */
 export function heatExposure(path: RoutePath, zones: readonly PreparedZone[], overlapIn: number): HeatExposure {
@@ -64,6 +71,8 @@ export function heatExposure(path: RoutePath, zones: readonly PreparedZone[], ov
   if (zones.length === 0 || path.count < 2) return { zones: exposures, required: [], planned: [], contact: false };
   const routeBox = pathBounds(path);
   const { xs, ys, s } = path;
+  const range = new Float64Array(2);
+  const chord = new Float64Array(4);
   for (const zone of zones) {
     if (!boxesOverlap(routeBox, zone.box)) continue;
     const near: Interval[] = [];
@@ -74,26 +83,40 @@ export function heatExposure(path: RoutePath, zones: readonly PreparedZone[], ov
       const ay = ys[i];
       const bx = xs[i + 1];
       const by = ys[i + 1];
-      if (chordMisses(ax, ay, bx, by, zone.box)) continue;
-      const a = { x: ax, y: ay };
-      const b = { x: bx, y: by };
+      const x0 = ax < bx ? ax : bx;
+      const x1 = ax < bx ? bx : ax;
+      const y0 = ay < by ? ay : by;
+      const y1 = ay < by ? by : ay;
+      // Box tests written out: a call that is not inlined would box its four numbers each time.
+      if (x1 < zone.box.minX || x0 > zone.box.maxX || y1 < zone.box.minY || y0 > zone.box.maxY) continue;
+      chord[0] = ax;
+      chord[1] = ay;
+      chord[2] = bx;
+      chord[3] = by;
       const s0 = s[i];
       const ds = s[i + 1] - s0;
-      if (!chordMisses(ax, ay, bx, by, zone.area)) {
-        const inside = segmentInsidePolygon(a, b, zone.polygon);
+      if (x1 >= zone.area.minX && x0 <= zone.area.maxX && y1 >= zone.area.minY && y0 <= zone.area.maxY) {
+        const inside = segmentInsidePolygon({ x: ax, y: ay }, { x: bx, y: by }, zone.polygon);
         if (inside.length > 0) contact = true;
-        for (const t of inside) near.push({ start: s0 + t.start * ds, end: s0 + t.end * ds });
+        for (const t of inside) addNear(near, s0 + t.start * ds, s0 + t.end * ds);
       }
       if (zone.clearanceIn <= 0) continue;
       for (const edge of zone.edges) {
-        if (chordMisses(ax, ay, bx, by, edge.box)) continue;
-        const t = segmentWithinCapsule(a, b, edge.e, edge.f, zone.clearanceIn);
-        if (t) near.push({ start: s0 + t[0] * ds, end: s0 + t[1] * ds });
+        if (x1 < edge.box.minX || x0 > edge.box.maxX || y1 < edge.box.minY || y0 > edge.box.maxY) continue;
+        if (chordWithinCapsule(chord, edge.capsule, range)) {
+          addNear(near, s0 + range[0] * ds, s0 + range[1] * ds);
+        }
       }
     }
     if (near.length > 0 || contact) exposures.push({ zoneId: zone.id, near: mergeIntervals(near), contact });
   }
-  const required = mergeIntervals(exposures.flatMap((e) => e.near));
+  const allNear: Interval[] = [];
+  let contact = false;
+  for (const e of exposures) {
+    for (const i of e.near) allNear.push(i);
+    if (e.contact) contact = true;
+  }
+  const required = mergeIntervals(allNear);
   const planned = mergeIntervals(clampIntervals(growIntervals(required, overlapIn), 0, path.lengthIn));
-  return { zones: exposures, required, planned, contact: exposures.some((e) => e.contact) };
+  return { zones: exposures, required, planned, contact };
 }
