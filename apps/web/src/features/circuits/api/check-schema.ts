@@ -7,7 +7,8 @@ import { z } from 'zod';
  * screens read are checked here; anything else passes through.
  */
 const inches = z.number().finite();
-const interval = z.looseObject({ startIn: inches, endIn: inches });
+/** An interval along a line, inches from its from end (the lib's geometry `Interval`). */
+const interval = z.looseObject({ start: inches, end: inches });
 
 export const lineReportSchema = z.looseObject({
   lineId: z.string().min(1),
@@ -33,6 +34,7 @@ export const lineReportSchema = z.looseObject({
     requiredIn: z.array(interval),
     plannedIn: z.array(interval),
     plannedLengthIn: inches,
+    uncoveredIn: z.array(interval),
     placed: z.array(z.looseObject({ id: z.string(), startIn: inches, endIn: inches, lengthIn: inches, partId: z.string().nullable() })),
     contact: z.boolean(),
   }),
@@ -47,7 +49,14 @@ export const flagSchema = z.looseObject({
   code: z.string().min(1),
   severity: severitySchema,
   message: z.string(),
-  target: z.looseObject({ kind: z.string(), id: z.string(), lineId: z.string().optional() }),
+  target: z.looseObject({
+    kind: z.enum(['line', 'port', 'joint', 'zone', 'circuit', 'unit']),
+    id: z.string(),
+    unitId: z.string().optional(),
+    lineId: z.string().optional(),
+    end: z.enum(['from', 'to']).optional(),
+    index: z.number().int().optional(),
+  }),
   fix: z.string(),
 });
 export type FlagView = z.infer<typeof flagSchema>;

@@ -82,7 +82,7 @@ export function lineReport(lineId: string, cutLengthIn: number | null, extra: Pa
     toleranceIn: 0.1875,
     fits: true,
     supports: { atIn: [{ id: 's-1', atIn: 9 }], longestSpanIn: 11, proposedAtIn: [] },
-    sleeves: { requiredIn: [], plannedIn: [], plannedLengthIn: 0, placed: [], contact: false },
+    sleeves: { requiredIn: [], plannedIn: [], plannedLengthIn: 0, uncoveredIn: [], placed: [], contact: false },
     ...extra,
   };
 }
