@@ -14,7 +14,11 @@ import { useRuleSummaries } from '../hooks/useRuleSummaries';
 import { QueryErrorBar } from './QueryErrorBar';
 import { SeverityLabel } from './SeverityLabel';
 
+// Fixed-layout table: the short columns get what they need, the description the rest.
 const useStyles = makeStyles({
+  codeColumn: { width: '13em' },
+  severityColumn: { width: '8em' },
+  ruleColumn: { width: '18em' },
   root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalM },
   code: { fontFamily: tokens.fontFamilyMonospace, whiteSpace: 'nowrap' },
 });
@@ -35,9 +39,9 @@ export function RulesSection() {
       <Table size="small" aria-label="Rules">
         <TableHeader>
           <TableRow>
-            <TableHeaderCell>Code</TableHeaderCell>
-            <TableHeaderCell>Severity</TableHeaderCell>
-            <TableHeaderCell>Rule</TableHeaderCell>
+            <TableHeaderCell className={styles.codeColumn}>Code</TableHeaderCell>
+            <TableHeaderCell className={styles.severityColumn}>Severity</TableHeaderCell>
+            <TableHeaderCell className={styles.ruleColumn}>Rule</TableHeaderCell>
             <TableHeaderCell>What it checks</TableHeaderCell>
           </TableRow>
         </TableHeader>

@@ -15,7 +15,12 @@ export interface ThreadCandidatesTableProps {
   candidates: readonly ThreadCandidate[];
 }
 
+// The table lays its columns out at fixed widths: short columns get what they need, the hint the rest.
 const useStyles = makeStyles({
+  rank: { width: '4em' },
+  thread: { width: '9em' },
+  family: { width: '12em' },
+  matchColumn: { width: '14em' },
   match: { display: 'flex', alignItems: 'center', gap: tokens.spacingHorizontalS, minWidth: '140px' },
   bar: { flexGrow: 1 },
   percent: { fontVariantNumeric: 'tabular-nums', minWidth: '3.5em', textAlign: 'right' },
@@ -28,10 +33,10 @@ export function ThreadCandidatesTable({ candidates }: ThreadCandidatesTableProps
     <Table size="small" aria-label="Candidate threads">
       <TableHeader>
         <TableRow>
-          <TableHeaderCell>Rank</TableHeaderCell>
-          <TableHeaderCell>Thread</TableHeaderCell>
-          <TableHeaderCell>Family and size</TableHeaderCell>
-          <TableHeaderCell>Match</TableHeaderCell>
+          <TableHeaderCell className={styles.rank}>Rank</TableHeaderCell>
+          <TableHeaderCell className={styles.thread}>Thread</TableHeaderCell>
+          <TableHeaderCell className={styles.family}>Family and size</TableHeaderCell>
+          <TableHeaderCell className={styles.matchColumn}>Match</TableHeaderCell>
           <TableHeaderCell>How to tell it apart</TableHeaderCell>
         </TableRow>
       </TableHeader>
