@@ -22,4 +22,11 @@ migrate_and_seed "$DATABASE_URL" >/dev/null
 export LOGIN_RATE_LIMIT=100000 LOG_LEVEL=warn
 start_server "$SOAK_PORT" "$DATABASE_URL" "$ROOT/artifacts/soak-server.log"
 log "soak against http://127.0.0.1:$SOAK_PORT (PostgreSQL on 127.0.0.1:$PGPORT)"
-cd "$ROOT" && LINESMITH_URL="http://127.0.0.1:$SOAK_PORT" node bench/soak/soak.mjs
+soak_status=0
+(cd "$ROOT" && LINESMITH_URL="http://127.0.0.1:$SOAK_PORT" node bench/soak/soak.mjs) || soak_status=$?
+# 10,000 fuzz cases with a fresh seed each run (printed with any failure; FUZZ_SEED=<n> replays it).
+FUZZ_SEED="${FUZZ_SEED:-$(( (RANDOM << 15) | RANDOM ))}"
+log "fuzzing the API: 10,000 cases, FUZZ_SEED=$FUZZ_SEED"
+fuzz_status=0
+(cd "$ROOT/apps/api" && DATABASE_URL="$DATABASE_URL" FUZZ_RUNS=10000 FUZZ_SEED="$FUZZ_SEED" npx jest test/fuzz.e2e-spec.ts --runInBand) || fuzz_status=$?
+exit $(( soak_status != 0 ? soak_status : fuzz_status ))

@@ -43,7 +43,8 @@ async function check<T>(name: string, arbitrary: fc.Arbitrary<T>, numRuns: numbe
   try {
     await fc.assert(fc.asyncProperty(arbitrary, predicate), { seed: SEED, numRuns, endOnFailure: true });
   } catch (error) {
-    throw new Error(`${name} failed with FUZZ_SEED=${SEED} FUZZ_RUNS=${TOTAL_RUNS}\n${(error as Error).message}`);
+    const cause = (error as Error).cause instanceof Error ? `\n${((error as Error).cause as Error).message}` : '';
+    throw new Error(`${name} failed with FUZZ_SEED=${SEED} FUZZ_RUNS=${TOTAL_RUNS}\n${(error as Error).message}${cause}`);
   }
 }
 
@@ -161,6 +162,8 @@ const uploadCase = fc.record({
 });
 
 describe('fuzzing: random and mutated input never breaks the API (e2e)', () => {
+  // npm run soak runs 10,000 cases: allow about 40 ms a case beyond the usual 30 s.
+  jest.setTimeout(30_000 + TOTAL_RUNS * 40);
   let storageDir: string;
   let testApp: TestApp;
   let shop: TestShop;
