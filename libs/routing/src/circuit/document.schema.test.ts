@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { coolerCircuitInput } from '../test-support/fixtures.js';
-import { circuitDocumentSchema, CIRCUIT_SCHEMA } from './document.schema.js';
+import { circuitDocumentSchema, CIRCUIT_SCHEMA, SKETCH_LIMITS } from './document.schema.js';
 import { CircuitVersionError, migrateCircuitDocument, migrateWith } from './migrate.js';
 
 describe('circuitDocumentSchema', () => {
@@ -63,6 +63,29 @@ describe('circuitDocumentSchema', () => {
         if (chosen.length === 1) expect(paths.some((p) => chosen[0].path.test(p))).toBe(true);
       }),
     );
+  });
+});
+
+describe('sketch limits (product bounds against hostile or corrupt documents)', () => {
+  it('refuses positions, lengths and scales no real sketch reaches, naming the path', () => {
+    const far = coolerCircuitInput();
+    far.units[0].y = 2_147_483_648;
+    expect(circuitDocumentSchema.safeParse(far).error!.issues.map((i) => i.path.join('.'))).toEqual(['units.0.y']);
+
+    const tinyScale = coolerCircuitInput();
+    tinyScale.calibration = { a: { x: 0, y: 0 }, b: { x: 10, y: 0 }, knownIn: 100 }; // 0.1 px/in
+    expect(circuitDocumentSchema.safeParse(tinyScale).error!.issues.map((i) => i.path.join('.'))).toEqual(['calibration.knownIn']);
+
+    const longMeasure = coolerCircuitInput();
+    longMeasure.lines[0].measuredLengthIn = SKETCH_LIMITS.lengthIn + 1;
+    expect(circuitDocumentSchema.safeParse(longMeasure).error!.issues.map((i) => i.path.join('.'))).toEqual(['lines.0.measuredLengthIn']);
+  });
+
+  it('accepts the edges of the bounds', () => {
+    const edge = coolerCircuitInput();
+    edge.units[0].x = SKETCH_LIMITS.coordinatePx;
+    edge.calibration = { a: { x: 0, y: 0 }, b: { x: 50, y: 0 }, knownIn: 100 }; // 0.5 px/in
+    expect(circuitDocumentSchema.safeParse(edge).success).toBe(true);
   });
 });
 

@@ -4,8 +4,31 @@ import { connectionSpecSchema, fluidSchema } from '@linesmith/catalog';
 /** The current version tag of a saved circuit document. Older tags are read through `migrateCircuitDocument`. */
 export const CIRCUIT_SCHEMA = 'linesmith.circuit/1';
 
-const id = z.string().trim().min(1, 'Id is required');
-const coordinate = z.number().finite();
+const id = z.string().trim().min(1, 'Id is required').max(64, 'Ids are at most 64 characters');
+/**
+ * Bounds that no real sketch comes near, so a hostile or corrupt document cannot make the engine
+ * work without end: positions within 200,000 px of the origin (photos are a few thousand px),
+ * lengths up to 12,000 in (1,000 ft), and a scale of at least 0.5 px per inch.
+ */
+export const SKETCH_LIMITS = {
+  coordinatePx: 200_000,
+  lengthIn: 12_000,
+  minPxPerIn: 0.5,
+  maxPxPerIn: 10_000,
+  units: 500,
+  portsPerUnit: 32,
+  lines: 1_000,
+  cornersPerLine: 200,
+  partsPerEndStack: 12,
+  supportsPerLine: 200,
+  sleevesPerLine: 50,
+  heatZones: 200,
+  zonePoints: 200,
+} as const;
+const L = SKETCH_LIMITS;
+const coordinate = z.number().finite().min(-L.coordinatePx).max(L.coordinatePx);
+const inches = z.number().finite().nonnegative().max(L.lengthIn, `At most ${L.lengthIn} in`);
+const label = z.string().trim().max(120, 'Labels are at most 120 characters').default('');
 export const sketchPointSchema = z.object({ x: coordinate, y: coordinate });
 
 export const unitKindSchema = z.enum([
@@ -31,7 +54,7 @@ export const portRequirementSchema = z.object({
 
 export const portSchema = z.object({
   id,
-  label: z.string().trim().default(''),
+  label,
   connection: connectionSpecSchema,
   role: portRoleSchema,
   /** Offset from the unit's position, in sketch pixels, before the unit's rotation. */
@@ -47,7 +70,7 @@ export const portSchema = z.object({
 export const unitSchema = z.object({
   id,
   kind: unitKindSchema,
-  label: z.string().trim().default(''),
+  label,
   x: coordinate,
   y: coordinate,
   /** Degrees, clockwise on the sketch. */
@@ -55,7 +78,7 @@ export const unitSchema = z.object({
   mountGroup: mountGroupSchema,
   /** What kind of valve this unit is, e.g. 'thermostatic-bypass'; set only on valves. */
   valveKind: z.string().trim().min(1).optional(),
-  ports: z.array(portSchema),
+  ports: z.array(portSchema).max(L.portsPerUnit),
 });
 
 export const portRefSchema = z.object({ unitId: id, portId: id });
@@ -64,16 +87,16 @@ export const routePointSchema = z.object({
   x: coordinate,
   y: coordinate,
   /** Bend radius at this corner in inches; 0 is a sharp corner. */
-  bendRadiusIn: z.number().finite().nonnegative(),
+  bendRadiusIn: inches,
 });
 
-export const supportSchema = z.object({ id, atIn: z.number().finite().nonnegative() });
+export const supportSchema = z.object({ id, atIn: inches });
 
 export const sleeveSchema = z
   .object({
     id,
-    startIn: z.number().finite().nonnegative(),
-    endIn: z.number().finite().nonnegative(),
+    startIn: inches,
+    endIn: inches,
     partId: id.nullable(),
   })
   .refine((s) => s.endIn > s.startIn, { message: 'A sleeve must end after it starts', path: ['endIn'] });
@@ -84,32 +107,40 @@ export const lineSchema = z.object({
   to: portRefSchema,
   hosePartId: id.nullable(),
   /** Corner points only; the two ends are the port positions. */
-  points: z.array(routePointSchema),
+  points: z.array(routePointSchema).max(L.cornersPerLine),
   /** Length measured along the real path; overrides the drawn length. */
-  measuredLengthIn: z.number().finite().positive().nullable().optional(),
+  measuredLengthIn: inches.positive().nullable().optional(),
   /** Slack the fabricator chose for this line; overrides the shop's slack when set. */
-  slackOverrideIn: z.number().finite().nonnegative().nullable().optional(),
+  slackOverrideIn: inches.nullable().optional(),
   /** Ordered part ids from the port outward: adapters …, then the hose end last. */
-  endStacks: z.object({ from: z.array(id), to: z.array(id) }),
-  supports: z.array(supportSchema).default([]),
-  sleeves: z.array(sleeveSchema).default([]),
+  endStacks: z.object({ from: z.array(id).max(L.partsPerEndStack), to: z.array(id).max(L.partsPerEndStack) }),
+  supports: z.array(supportSchema).max(L.supportsPerLine).default([]),
+  sleeves: z.array(sleeveSchema).max(L.sleevesPerLine).default([]),
 });
 
 export const heatZoneSchema = z.object({
   id,
-  label: z.string().trim().default(''),
+  label,
   kind: heatZoneKindSchema,
-  polygon: z.array(sketchPointSchema).min(3, 'A heat zone needs at least 3 points'),
+  polygon: z.array(sketchPointSchema).min(3, 'A heat zone needs at least 3 points').max(L.zonePoints),
   /** Inches; when absent the shop's clearance for the zone kind applies. */
-  clearanceIn: z.number().finite().nonnegative().optional(),
+  clearanceIn: inches.optional(),
 });
 
 export const calibrationSchema = z
-  .object({ a: sketchPointSchema, b: sketchPointSchema, knownIn: z.number().finite().positive() })
+  .object({ a: sketchPointSchema, b: sketchPointSchema, knownIn: inches.positive() })
   .refine((c) => c.a.x !== c.b.x || c.a.y !== c.b.y, {
     message: 'The two calibration points must differ',
     path: ['b'],
-  });
+  })
+  .refine(
+    (c) => {
+      const px = Math.hypot(c.b.x - c.a.x, c.b.y - c.a.y);
+      if (px === 0) return true; // reported above
+      return px / c.knownIn >= L.minPxPerIn && px / c.knownIn <= L.maxPxPerIn;
+    },
+    { message: `The scale must lie between ${L.minPxPerIn} and ${L.maxPxPerIn} px per inch: check the known distance`, path: ['knownIn'] },
+  );
 
 export const backgroundSchema = z.object({
   uploadId: id,
@@ -128,9 +159,9 @@ const circuitDocumentShape = z.object({
   circuit: circuitSettingsSchema,
   calibration: calibrationSchema.nullable(),
   background: backgroundSchema.nullable(),
-  units: z.array(unitSchema),
-  lines: z.array(lineSchema),
-  heatZones: z.array(heatZoneSchema),
+  units: z.array(unitSchema).max(L.units),
+  lines: z.array(lineSchema).max(L.lines),
+  heatZones: z.array(heatZoneSchema).max(L.heatZones),
 });
 
 /** One circuit revision as saved (DOMAIN §3). Positions in sketch pixels. */
