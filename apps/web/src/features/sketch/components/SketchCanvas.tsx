@@ -9,9 +9,8 @@ import { addCorner } from '../model/commands/add-corner';
 import { addHeatZone } from '../model/commands/add-heat-zone';
 import { addLine } from '../model/commands/add-line';
 import { addSupport } from '../model/commands/add-support';
-import { moveCorner } from '../model/commands/move-corner';
-import { moveSelection } from '../model/commands/move-selection';
 import { removeCorner } from '../model/commands/remove-corner';
+import { dragFootprint, flagFollowsDrag, type DragTarget } from '../model/drag-preview';
 import { sketchScale } from '../model/geometry/calibration';
 import { distanceAlongLine, linePathIn, nearestSegment, routePx } from '../model/geometry/line-route';
 import { findPortNear, PORT_SNAP_SCREEN_PX, portTaken } from '../model/geometry/snap-to-port';
@@ -21,7 +20,9 @@ import { toSketch, zoomAt } from '../model/view';
 import { cutLengthLabel } from '../utils/cut-length-label';
 import { flagItem, flagPosition } from '../utils/flag-target';
 import { fluidStyle } from '../utils/fluid-colours';
+import { selectedPortOf, showsCornerHandles, zoneClearancePx } from '../utils/shape-props';
 import { BackgroundImage } from './BackgroundImage';
+import { DragPreviewLayer } from './DragPreviewLayer';
 import { CornerHandle } from './shapes/CornerHandle';
 import { FlagMarker } from './shapes/FlagMarker';
 import { HeatZoneShape } from './shapes/HeatZoneShape';
@@ -51,6 +52,7 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
   const selection = useEditorState(store, (s) => s.selection);
   const tool = useEditorState(store, (s) => s.tool);
   const view = useEditorState(store, (s) => s.view);
+  const dragTarget = useEditorState(store, (s) => s.drag?.target ?? null);
   const stageRef = useRef<Konva.Stage>(null);
   const [cursor, setCursor] = useState<Point | null>(null);
   const [spaceDown, setSpaceDown] = useState(false);
@@ -77,6 +79,8 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
     [doc.lines],
   );
   const zoom = view.zoom;
+  // While a drag runs its items are drawn by the drag-preview layer and left out here.
+  const footprint = useMemo(() => (dragTarget ? dragFootprint(doc, dragTarget) : null), [doc, dragTarget]);
 
   const pointer = (): Point | null => {
     const stage = stageRef.current;
@@ -98,13 +102,16 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
     [store],
   );
 
-  // --- Drags: one history step per drag -----------------------------------------------------
+  // --- Drags: a preview while the pointer moves, one history step on drop ---------------------
   const dragSelectionFor = (item: SelectedItem): Selection => {
     const current = store.getState().selection;
     if (isSelected(current, item)) return current;
     store.select([item]);
     return [item];
   };
+  const startDrag = (label: string, target: DragTarget) => store.startDrag(label, target);
+  const dragTo = (dx: number, dy: number) => store.dragTo(dx, dy);
+  const endDrag = () => store.endDrag();
 
   const onStageMouseDown = (e: KonvaEventObject<MouseEvent>) => {
     const screen = stageRef.current?.getPointerPosition();
@@ -130,7 +137,8 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
       return;
     }
     const p = toSketch(store.getState().view, screen);
-    setCursor(p);
+    // Only the drawing tools show a rubber band to the cursor; the select tool re-renders nothing here.
+    if (store.getState().tool !== 'select') setCursor(p);
     const d = store.getState().toolDraft;
     if (d?.tool === 'marquee') store.setToolDraft({ ...d, end: p });
   };
@@ -274,14 +282,12 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
             zoom={zoom}
             selected={isSelected(selection, { kind: 'zone', id: zone.id })}
             draggable={draggable}
-            clearancePx={pxPerIn ? pxPerIn * (zone.clearanceIn ?? shopRules.heatClearanceIn[zone.kind]) : null}
+            hidden={footprint?.zones.has(zone.id)}
+            clearancePx={zoneClearancePx(zone, pxPerIn, shopRules)}
             onSelect={(e) => choose({ kind: 'zone', id: zone.id }, e)}
-            onDragStart={() => {
-              dragSelectionFor({ kind: 'zone', id: zone.id });
-              store.beginGesture('Move heat zone');
-            }}
-            onDragMove={(dx, dy) => store.run(moveSelection, { selection: store.getState().selection, dx, dy })}
-            onDragEnd={() => store.endGesture()}
+            onDragStart={() => startDrag('Move heat zone', { kind: 'selection', selection: dragSelectionFor({ kind: 'zone', id: zone.id }) })}
+            onDragMove={dragTo}
+            onDragEnd={endDrag}
           />
         ))}
         {doc.lines.map((line) => (
@@ -294,6 +300,7 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
             fluid={style}
             zoom={zoom}
             selected={selectedLineIds.has(line.id)}
+            hidden={footprint?.lines.has(line.id)}
             onSelect={(e) => choose({ kind: 'line', id: line.id }, e)}
             onDoubleClick={(p) => {
               const route = routePx(doc, line);
@@ -308,24 +315,19 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
             unit={unit}
             zoom={zoom}
             selected={isSelected(selection, { kind: 'unit', id: unit.id })}
-            selectedPortId={selection.find((s): s is Extract<SelectedItem, { kind: 'port' }> => s.kind === 'port' && s.unitId === unit.id)?.id ?? null}
+            selectedPortId={selectedPortOf(selection, unit.id)}
             connectedPorts={connected}
             draggable={draggable}
+            hidden={footprint?.units.has(unit.id)}
             onSelect={(e) => choose({ kind: 'unit', id: unit.id }, e)}
             onSelectPort={(portId, e) => choose({ kind: 'port', unitId: unit.id, id: portId }, e)}
-            onDragStart={() => {
-              dragSelectionFor({ kind: 'unit', id: unit.id });
-              store.beginGesture('Move unit');
-            }}
-            onDragMove={(x, y) => {
-              const current = store.getState().history.doc.units.find((u) => u.id === unit.id);
-              if (current) store.run(moveSelection, { selection: store.getState().selection, dx: x - current.x, dy: y - current.y });
-            }}
-            onDragEnd={() => store.endGesture()}
+            onDragStart={() => startDrag('Move unit', { kind: 'selection', selection: dragSelectionFor({ kind: 'unit', id: unit.id }) })}
+            onDragMove={dragTo}
+            onDragEnd={endDrag}
           />
         ))}
         {doc.lines
-          .filter((line) => selectedLineIds.has(line.id) || line.points.some((_, i) => cornerSelected(line.id, i)))
+          .filter((line) => showsCornerHandles(selection, line.id, line.points.length))
           .flatMap((line) =>
             line.points.map((p, index) => (
               <CornerHandle
@@ -334,6 +336,7 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
                 y={p.y}
                 zoom={zoom}
                 selected={cornerSelected(line.id, index)}
+                hidden={footprint?.lines.has(line.id)}
                 onPointerDown={(e) => {
                   e.cancelBubble = true;
                   if (e.evt.altKey) {
@@ -342,15 +345,16 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
                   }
                   store.select([{ kind: 'line', id: line.id }, { kind: 'corner', lineId: line.id, index }]);
                 }}
-                onDragStart={() => store.beginGesture('Move corner')}
-                onDragMove={(x, y) => store.run(moveCorner, { lineId: line.id, index, x, y })}
-                onDragEnd={() => store.endGesture()}
+                onDragStart={() => startDrag('Move corner', { kind: 'corner', lineId: line.id, index, from: { x: p.x, y: p.y } })}
+                onDragMove={dragTo}
+                onDragEnd={endDrag}
               />
             )),
           )}
       </Layer>
       <Layer>
         {doc.lines.map((line) => {
+          if (footprint?.lines.has(line.id)) return null;
           const route = routePx(doc, line);
           if (!route) return null;
           const at = labelPosition(route);
@@ -366,6 +370,7 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
           );
         })}
         {evaluation.flags.map((flag, i) => {
+          if (footprint && flagFollowsDrag(doc, flag, footprint)) return null;
           const at = flagPosition(doc, flag);
           if (!at) return null;
           const item = flagItem(flag);
@@ -382,6 +387,17 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
           );
         })}
       </Layer>
+      {footprint && (
+        <DragPreviewLayer
+          footprint={footprint}
+          selection={selection}
+          zoom={zoom}
+          pxPerIn={pxPerIn}
+          fluid={style}
+          reports={reports}
+          connectedPorts={connected}
+        />
+      )}
       <Layer listening={false}>
         <DraftOverlay zoom={zoom} cursor={cursor} />
       </Layer>

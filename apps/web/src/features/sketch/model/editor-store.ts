@@ -1,5 +1,6 @@
 import type { CircuitDocument } from '@linesmith/routing';
 import type { Command } from './commands/command';
+import { dropDrag, type DragPreview, type DragTarget } from './drag-preview';
 import * as history from './history';
 import { emptySelection, type Selection } from './selection';
 import type { ToolDraft, ToolId } from './tools';
@@ -11,6 +12,8 @@ export interface EditorState {
   tool: ToolId;
   toolDraft: ToolDraft | null;
   view: View;
+  /** The drag in progress, drawn as a preview; the document changes when it is dropped. */
+  drag: DragPreview | null;
 }
 
 /** The sketch editor's state container: the document with its history, plus selection, tool and view. */
@@ -20,6 +23,12 @@ export interface EditorStore {
   run<A>(cmd: Command<A>, args: A): void;
   beginGesture(label: string): void;
   endGesture(): void;
+  /** Starts a drag preview (pointer down and moved past the drag distance). */
+  startDrag(label: string, target: DragTarget): void;
+  /** The pointer's travel since the drag started, in sketch pixels. */
+  dragTo(dx: number, dy: number): void;
+  /** Drops the drag: one command, one undo step named after the drag (nothing when it ends where it started). */
+  endDrag(): void;
   undo(): void;
   redo(): void;
   select(selection: Selection): void;
@@ -53,7 +62,7 @@ function pruneSelection(doc: CircuitDocument, selection: Selection): Selection {
 }
 
 export function createEditorStore(doc: CircuitDocument, selection: Selection = emptySelection): EditorStore {
-  let state: EditorState = { history: history.startHistory(doc), selection, tool: 'select', toolDraft: null, view: initialView };
+  let state: EditorState = { history: history.startHistory(doc), selection, tool: 'select', toolDraft: null, view: initialView, drag: null };
   const listeners = new Set<() => void>();
   const set = (next: Partial<EditorState>) => {
     state = { ...state, ...next };
@@ -72,12 +81,23 @@ export function createEditorStore(doc: CircuitDocument, selection: Selection = e
     },
     beginGesture: (label) => set({ history: history.beginGesture(state.history, label) }),
     endGesture: () => set({ history: history.endGesture(state.history) }),
-    undo: () => set({ history: history.undo(state.history), toolDraft: null }),
-    redo: () => set({ history: history.redo(state.history), toolDraft: null }),
+    startDrag: (label, target) => set({ drag: { label, target, dx: 0, dy: 0 } }),
+    dragTo(dx, dy) {
+      const drag = state.drag;
+      if (drag && (drag.dx !== dx || drag.dy !== dy)) set({ drag: { ...drag, dx, dy } });
+    },
+    endDrag() {
+      const drag = state.drag;
+      if (!drag) return;
+      const dropped = dropDrag(state.history, drag);
+      set(dropped === state.history ? { drag: null } : { history: dropped, drag: null });
+    },
+    undo: () => set({ history: history.undo(state.history), toolDraft: null, drag: null }),
+    redo: () => set({ history: history.redo(state.history), toolDraft: null, drag: null }),
     select: (next) => set({ selection: next }),
     setTool: (tool) => set({ tool, toolDraft: null }),
     setToolDraft: (toolDraft) => set({ toolDraft }),
     setView: (view) => set({ view }),
-    replaceDocument: (next) => set({ history: history.startHistory(next), selection: emptySelection, toolDraft: null }),
+    replaceDocument: (next) => set({ history: history.startHistory(next), selection: emptySelection, toolDraft: null, drag: null }),
   };
 }

@@ -2,16 +2,20 @@ import type { HeatZone } from '@linesmith/routing';
 import type { Context } from 'konva/lib/Context';
 import type { KonvaEventObject } from 'konva/lib/Node';
 import { Group, Line, Text } from 'react-konva';
+import { pinnedDrag } from './pinned-drag';
 
 export interface HeatZoneShapeProps {
   zone: HeatZone;
   selected: boolean;
   draggable: boolean;
+  /** Left out of the drawing while a drag preview draws it elsewhere. */
+  hidden?: boolean;
   zoom: number;
   /** Clearance drawn around the zone, in sketch pixels (null without calibration). */
   clearancePx: number | null;
   onSelect(event: KonvaEventObject<MouseEvent>): void;
   onDragStart(): void;
+  /** The pointer's travel since the drag started, in sketch pixels (the zone itself stays put). */
   onDragMove(dx: number, dy: number): void;
   onDragEnd(): void;
 }
@@ -19,7 +23,7 @@ export interface HeatZoneShapeProps {
 const HATCH_GAP = 10;
 
 /** A heat zone: red outline, red hatching clipped to the polygon, its label, and its clearance. */
-export function HeatZoneShape({ zone, selected, draggable, zoom, clearancePx, ...handlers }: HeatZoneShapeProps) {
+export function HeatZoneShape({ zone, selected, draggable, hidden = false, zoom, clearancePx, ...handlers }: HeatZoneShapeProps) {
   const flat = zone.polygon.flatMap((p) => [p.x, p.y]);
   const xs = zone.polygon.map((p) => p.x);
   const ys = zone.polygon.map((p) => p.y);
@@ -33,18 +37,9 @@ export function HeatZoneShape({ zone, selected, draggable, zoom, clearancePx, ..
   };
   return (
     <Group
+      visible={!hidden}
       draggable={draggable}
-      onDragStart={(e) => {
-        e.cancelBubble = true;
-        handlers.onDragStart();
-      }}
-      onDragMove={(e) => {
-        // The group moves as a whole; turn its offset into a move of the polygon and reset it.
-        const { x, y } = e.target.position();
-        e.target.position({ x: 0, y: 0 });
-        handlers.onDragMove(x, y);
-      }}
-      onDragEnd={handlers.onDragEnd}
+      {...pinnedDrag(handlers)}
       name="zone"
     >
       {clearancePx !== null && clearancePx > 0 && (

@@ -16,6 +16,8 @@ export interface LineShapeProps {
   pxPerIn: number | null;
   fluid: FluidStyle;
   selected: boolean;
+  /** Left out of the drawing while a drag preview draws it elsewhere. */
+  hidden?: boolean;
   zoom: number;
   /** Draws the cut-length label with the line; the editor leaves it out and draws labels above the units. */
   label?: string;
@@ -43,14 +45,14 @@ export function labelPosition(route: readonly Point[]): Point {
 }
 
 /** A line: its route with bends in the fluid-class colour, sleeves and supports (its label is drawn on top, see DimensionLabel). */
-export function LineShape({ doc, line, report, pxPerIn, fluid, selected, zoom, label, onSelect, onDoubleClick }: LineShapeProps) {
+export function LineShape({ doc, line, report, pxPerIn, fluid, selected, hidden = false, zoom, label, onSelect, onDoubleClick }: LineShapeProps) {
   const route = routePx(doc, line);
   if (!route) return null;
   const basisIn = report?.measuredLengthIn ?? null;
   const geometry = pxPerIn ? linePathIn(doc, line, pxPerIn, basisIn) : null;
   const points = geometry && pxPerIn && report?.fits !== false ? pathPoints(geometry, pxPerIn) : route.flatMap((p) => [p.x, p.y]);
   return (
-    <Group name="line">
+    <Group name="line" visible={!hidden}>
       {geometry &&
         pxPerIn &&
         report?.sleeves.uncoveredIn.map((s, i) => (

@@ -2,6 +2,7 @@ import type { CircuitUnit } from '@linesmith/routing';
 import type { KonvaEventObject } from 'konva/lib/Node';
 import { Group, Rect, Text } from 'react-konva';
 import { unitSize } from '../../model/unit-presets';
+import { pinnedDrag } from './pinned-drag';
 import { PortShape } from './PortShape';
 
 export interface UnitShapeProps {
@@ -10,11 +11,14 @@ export interface UnitShapeProps {
   selectedPortId: string | null;
   connectedPorts: ReadonlySet<string>;
   draggable: boolean;
+  /** Left out of the drawing while a drag preview draws it elsewhere. */
+  hidden?: boolean;
   zoom: number;
   onSelect(event: KonvaEventObject<MouseEvent>): void;
   onSelectPort(portId: string, event: KonvaEventObject<MouseEvent>): void;
   onDragStart(): void;
-  onDragMove(x: number, y: number): void;
+  /** The pointer's travel since the drag started, in sketch pixels (the unit itself stays put). */
+  onDragMove(dx: number, dy: number): void;
   onDragEnd(): void;
 }
 
@@ -29,13 +33,9 @@ export function UnitShape(props: UnitShapeProps) {
       x={unit.x}
       y={unit.y}
       rotation={unit.rotation}
+      visible={!props.hidden}
       draggable={props.draggable}
-      onDragStart={(e) => {
-        e.cancelBubble = true;
-        props.onDragStart();
-      }}
-      onDragMove={(e) => props.onDragMove(e.target.x(), e.target.y())}
-      onDragEnd={() => props.onDragEnd()}
+      {...pinnedDrag(props)}
       name="unit"
     >
       <Rect

@@ -1,3 +1,4 @@
+import type { CircuitLine } from '@linesmith/routing';
 import type { Selection } from '../selection';
 import { selectedIds } from '../selection';
 import { command } from './command';
@@ -6,6 +7,11 @@ export interface MoveSelectionArgs {
   selection: Selection;
   dx: number;
   dy: number;
+}
+
+/** True when a move of the selection carries the line's corners along (the drag preview asks the same). */
+export function cornersMove(line: Pick<CircuitLine, 'id' | 'from' | 'to'>, ids: ReturnType<typeof selectedIds>): boolean {
+  return ids.lines.has(line.id) || (ids.units.has(line.from.unitId) && ids.units.has(line.to.unitId));
 }
 
 /**
@@ -27,8 +33,7 @@ export const moveSelection = command<MoveSelectionArgs>('Move', (draft, { select
     }
   }
   for (const line of draft.lines) {
-    const withUnits = ids.units.has(line.from.unitId) && ids.units.has(line.to.unitId);
-    if (!ids.lines.has(line.id) && !withUnits) continue;
+    if (!cornersMove(line, ids)) continue;
     for (const p of line.points) {
       p.x += dx;
       p.y += dy;
