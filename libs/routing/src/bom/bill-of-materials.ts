@@ -9,7 +9,6 @@ import { plugSealNeeds, sealDescription, sealKey, stackSealNeeds } from './seal-
 const KIND_ORDER: readonly PartKind[] = ['hose', 'hose-end', 'adapter', 'bulkhead', 'plug', 'seal', 'clamp', 'sleeve'];
 
 interface Tally {
-  key: string;
   part: Part | undefined;
   kind: PartKind;
   description: string;
@@ -36,11 +35,13 @@ export interface BomInput {
  */
 export function billOfMaterials(input: BomInput): BillOfMaterials {
   const { parts, rules } = input;
-  const tallies = new Map<string, Tally>();
-  const add = (key: string, part: Part | undefined, kind: PartKind, description: string, unit: 'in' | 'each', quantity: number, lineId?: string) => {
+  // Catalogue parts are keyed by the part object itself (all come from `parts`, one per id): no key
+  // string to build and hash for every hose end and adapter of a large circuit.
+  const tallies = new Map<Part | string, Tally>();
+  const add = (key: Part | string, part: Part | undefined, kind: PartKind, description: string, unit: 'in' | 'each', quantity: number, lineId?: string) => {
     let tally = tallies.get(key);
     if (!tally) {
-      tally = { key, part, kind, description, unit, quantity: 0, cuts: 0, lineIds: new Set() };
+      tally = { part, kind, description, unit, quantity: 0, cuts: 0, lineIds: new Set() };
       tallies.set(key, tally);
     }
     tally.quantity += quantity;
@@ -48,7 +49,7 @@ export function billOfMaterials(input: BomInput): BillOfMaterials {
     return tally;
   };
   const addPart = (part: Part, unit: 'in' | 'each', quantity: number, lineId?: string) =>
-    add(`part:${part.id}`, part, part.kind, part.description, unit, quantity, lineId);
+    add(part, part, part.kind, part.description, unit, quantity, lineId);
   const sealCatalogue = new Map<string, Part>();
   for (const part of parts.values()) {
     if (part.kind === 'seal' && !part.retired && !sealCatalogue.has(sealKey(part.attributes.seal))) {

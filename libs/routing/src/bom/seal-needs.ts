@@ -28,10 +28,9 @@ export function stackSealNeeds(port: PortEntry | undefined, stack: ResolvedStack
     if (item.index === 0 && portSeal) continue; // the same joint: the port's seal is the one it takes
     needs.push(part.attributes.seal);
   }
-  const listed = stack.items
-    .map((i) => i.part)
-    .filter((p): p is Extract<Part, { kind: 'seal' }> => p?.kind === 'seal')
-    .map((p) => sealKey(p.attributes.seal));
+  const listed: string[] = [];
+  for (const item of stack.items) if (item.part?.kind === 'seal') listed.push(sealKey(item.part.attributes.seal));
+  if (listed.length === 0) return needs; // the usual stack lists no seals: nothing to take off
   return needs.filter((need) => {
     const at = listed.indexOf(sealKey(need));
     if (at < 0) return true;

@@ -66,6 +66,7 @@ export function centrelineDetail(pointsIn: readonly Vec[], bendRadiiIn: readonly
     sharpIn += leg;
   }
   const bends: Bend[] = [];
+  // Plain arrays, not Float64Array: creating a typed array costs more than these few numbers.
   const tangentAt: number[] = [0];
   let fits = true;
   let bendSavingIn = 0;

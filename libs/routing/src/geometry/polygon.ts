@@ -36,15 +36,20 @@ export function segmentPolygonDistance(a: Vec, b: Vec, polygon: readonly Vec[]):
 
 /** Parameter intervals of segment ab (0…1) inside the polygon, including where it runs along an edge. */
 export function segmentInsidePolygon(a: Vec, b: Vec, polygon: readonly Vec[]): Interval[] {
+  // Plain loops: the heat check calls this for every chord that enters a zone's box.
   const hits: number[] = [];
-  forEachEdge(polygon, (e, f) => {
-    hits.push(...segmentIntersectionParams(a, b, e, f));
-  });
+  for (let i = 0; i < polygon.length; i++) {
+    const params = segmentIntersectionParams(a, b, polygon[i], polygon[(i + 1) % polygon.length]);
+    for (let k = 0; k < params.length; k++) hits.push(params[k]);
+  }
   if (hits.length === 0) return pointInPolygon(a, polygon) ? [{ start: 0, end: 1 }] : [];
-  const cuts = [0, 1, ...hits].sort((x, y) => x - y);
+  const cuts = [0, 1];
+  for (let k = 0; k < hits.length; k++) cuts.push(hits[k]);
+  cuts.sort((x, y) => x - y);
   const inside: Interval[] = [];
   for (let i = 0; i < cuts.length - 1; i++) {
-    const [s, e] = [cuts[i], cuts[i + 1]];
+    const s = cuts[i];
+    const e = cuts[i + 1];
     if (e - s < 1e-12) continue;
     if (pointInPolygon(lerp(a, b, (s + e) / 2), polygon)) inside.push({ start: s, end: e });
   }

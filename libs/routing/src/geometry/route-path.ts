@@ -11,9 +11,9 @@ const MAX_CHORD_RAD = Math.PI / 12;
  * a large circuit has tens of thousands of vertices per evaluation.
  */
 export interface RoutePath {
-  xs: Float64Array;
-  ys: Float64Array;
-  s: Float64Array;
+  xs: number[];
+  ys: number[];
+  s: number[];
   count: number;
   lengthIn: number;
 }
@@ -23,52 +23,58 @@ const piecesOf = (deflectionRad: number) => Math.max(1, Math.ceil(deflectionRad 
 /** Builds the path of a centreline. A route whose bends do not fit is walked through its sharp corners. */
 export function routePath(detail: CentrelineDetail): RoutePath {
   const { points: corners, bends, fits } = detail;
+  // Plain arrays sized once, and the steps written out: typed arrays cost more to create than
+  // these few dozen numbers, and helper calls that V8 does not inline box every coordinate.
   let capacity = corners.length + 1;
   if (fits) for (const bend of bends) capacity += piecesOf(bend.deflectionRad) + 1;
-  const xs = new Float64Array(capacity);
-  const ys = new Float64Array(capacity);
-  const s = new Float64Array(capacity);
-  let count = 0;
-  const push = (x: number, y: number, ds: number) => {
-    xs[count] = x;
-    ys[count] = y;
-    s[count] = count === 0 ? 0 : s[count - 1] + ds;
-    count++;
-  };
-  const lineTo = (x: number, y: number) => {
-    const d = norm(x - xs[count - 1], y - ys[count - 1]);
-    if (d > 1e-12) push(x, y, d);
-  };
-  if (corners.length === 0) return { xs, ys, s, count: 0, lengthIn: 0 };
-  push(corners[0].x, corners[0].y, 0);
+  const xs = new Array<number>(capacity);
+  const ys = new Array<number>(capacity);
+  const s = new Array<number>(capacity);
+  if (corners.length === 0) return { xs: [], ys: [], s: [], count: 0, lengthIn: 0 };
+  xs[0] = corners[0].x;
+  ys[0] = corners[0].y;
+  s[0] = 0;
+  let count = 1;
   for (let i = 1; i < corners.length; i++) {
     const corner = corners[i];
     const bend = fits && i < corners.length - 1 ? bends[i - 1] : undefined;
-    if (!bend || bend.tangentIn === 0) {
-      lineTo(corner.x, corner.y);
-      continue;
-    }
+    const straight = !bend || bend.tangentIn === 0;
     const prev = corners[i - 1];
-    const next = corners[i + 1];
-    const inLen = norm(corner.x - prev.x, corner.y - prev.y);
-    const outLen = norm(next.x - corner.x, next.y - corner.y);
+    const inLen = Math.sqrt((corner.x - prev.x) * (corner.x - prev.x) + (corner.y - prev.y) * (corner.y - prev.y));
     const ix = (corner.x - prev.x) / inLen;
     const iy = (corner.y - prev.y) / inLen;
+    // The straight run up to the corner, or to where its bend starts.
+    const toX = straight ? corner.x : corner.x - ix * bend.tangentIn;
+    const toY = straight ? corner.y : corner.y - iy * bend.tangentIn;
+    const last = count - 1;
+    const run = Math.sqrt((toX - xs[last]) * (toX - xs[last]) + (toY - ys[last]) * (toY - ys[last]));
+    if (run > 1e-12) {
+      xs[count] = toX;
+      ys[count] = toY;
+      s[count] = s[last] + run;
+      count++;
+    }
+    if (straight) continue;
+    const next = corners[i + 1];
+    const outLen = Math.sqrt((next.x - corner.x) * (next.x - corner.x) + (next.y - corner.y) * (next.y - corner.y));
     const ox = (next.x - corner.x) / outLen;
     const oy = (next.y - corner.y) / outLen;
-    const startX = corner.x - ix * bend.tangentIn;
-    const startY = corner.y - iy * bend.tangentIn;
-    lineTo(startX, startY);
     const turn = Math.sign(ix * oy - iy * ox);
-    const cx = startX - iy * turn * bend.radiusIn;
-    const cy = startY + ix * turn * bend.radiusIn;
-    const a0 = Math.atan2(startY - cy, startX - cx);
+    const cx = toX - iy * turn * bend.radiusIn;
+    const cy = toY + ix * turn * bend.radiusIn;
+    const a0 = Math.atan2(toY - cy, toX - cx);
     const pieces = piecesOf(bend.deflectionRad);
     for (let k = 1; k <= pieces; k++) {
       const a = a0 + (turn * bend.deflectionRad * k) / pieces;
-      push(cx + bend.radiusIn * Math.cos(a), cy + bend.radiusIn * Math.sin(a), bend.arcIn / pieces);
+      xs[count] = cx + bend.radiusIn * Math.cos(a);
+      ys[count] = cy + bend.radiusIn * Math.sin(a);
+      s[count] = s[count - 1] + bend.arcIn / pieces;
+      count++;
     }
   }
+  xs.length = count;
+  ys.length = count;
+  s.length = count;
   return { xs, ys, s, count, lengthIn: s[count - 1] };
 }
 

@@ -108,9 +108,15 @@ export function analyseLine(line: CircuitLine, env: LineEnvironment): LineAnalys
   const heat = rawHeat && Math.abs(stretch - 1) > STRETCH_NOISE ? stretchHeat(rawHeat, stretch) : rawHeat;
 
   const lengthForSupports = basisIn ?? 0;
-  const supportsAt = line.supports.map((s) => ({ id: s.id, atIn: s.atIn }));
-  const spans = basisIn === null ? [] : unsupportedSpans(lengthForSupports, supportsAt.map((s) => s.atIn));
-  const placed = line.sleeves.map((s) => ({ ...s, lengthIn: s.endIn - s.startIn }));
+  const supportsAt: Array<{ id: string; atIn: number }> = [];
+  const supportPositions: number[] = [];
+  for (const s of line.supports) {
+    supportsAt.push({ id: s.id, atIn: s.atIn });
+    supportPositions.push(s.atIn);
+  }
+  const spans = basisIn === null ? [] : unsupportedSpans(lengthForSupports, supportPositions);
+  const placed: LineReport['sleeves']['placed'] = [];
+  for (const s of line.sleeves) placed.push({ id: s.id, startIn: s.startIn, endIn: s.endIn, lengthIn: s.endIn - s.startIn, partId: s.partId });
   const requiredIn = heat?.required ?? [];
   const plannedIn = heat?.planned ?? [];
 

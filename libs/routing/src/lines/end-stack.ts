@@ -76,12 +76,12 @@ export function resolveEndStack(
       stack.joints.push({ index: item.index, inner: exposed, outer: side, partId: item.partId, result: mateFn(exposed, side) });
     }
   };
-  items.forEach((item) => {
+  for (const item of items) {
     const { part } = item;
     if (!part) {
       stack.missingIds.push(item.partId);
       exposed = undefined; // the chain is broken; joints past an unknown part cannot be checked
-      return;
+      continue;
     }
     const isLast = item.index === items.length - 1;
     if (part.kind === 'adapter' || part.kind === 'bulkhead') {
@@ -100,6 +100,6 @@ export function resolveEndStack(
     } else if (part.kind !== 'seal') {
       stack.misplaced.push(item);
     }
-  });
+  }
   return stack;
 }

@@ -65,14 +65,18 @@ function addNear(near: Interval[], start: number, end: number): void {
   }
 }
 
+/** Scratch for chordWithinCapsule, shared by every call (creating typed arrays per route costs more). */
+const CHORD = new Float64Array(4);
+const RANGE = new Float64Array(2);
+
 /** Heat exposure of one route against the circuit's heat zones (all in inches). */
 export function heatExposure(path: RoutePath, zones: readonly PreparedZone[], overlapIn: number): HeatExposure {
   const exposures: ZoneExposure[] = [];
   if (zones.length === 0 || path.count < 2) return { zones: exposures, required: [], planned: [], contact: false };
   const routeBox = pathBounds(path);
   const { xs, ys, s } = path;
-  const range = new Float64Array(2);
-  const chord = new Float64Array(4);
+  const range = RANGE;
+  const chord = CHORD;
   for (const zone of zones) {
     if (!boxesOverlap(routeBox, zone.box)) continue;
     const near: Interval[] = [];

@@ -9,7 +9,9 @@ export function unsupportedSpans(lengthIn: number, supportsAtIn: readonly number
   const stops = [0];
   for (const at of supportsAtIn) if (at > 0 && at < lengthIn) stops.push(at);
   stops.push(lengthIn);
-  if (supportsAtIn.length > 1) stops.sort((a, b) => a - b);
+  let inOrder = true;
+  for (let i = 1; i < stops.length && inOrder; i++) if (stops[i] < stops[i - 1]) inOrder = false;
+  if (!inOrder) stops.sort((a, b) => a - b); // supports are usually listed from the from end already
   const spans: Span[] = [];
   for (let i = 0; i < stops.length - 1; i++) {
     const lengthOfSpan = stops[i + 1] - stops[i];
