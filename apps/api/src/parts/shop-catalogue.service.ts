@@ -5,6 +5,17 @@ import type { PartDto } from './dto/part.dto.js';
 import { PartEntity } from './part.entity.js';
 import { toPartDto } from './part.mapper.js';
 
+/**
+ * One text that changes whenever a shop's parts do (row count, sum of versions, latest change), as
+ * a scalar sub-select over the shop id in parameter `$<n>`: callers that need other rows in the
+ * same round trip (the rules check) embed it in their own query.
+ */
+export function catalogueFingerprintSql(shopParam: number): string {
+  return `(SELECT count(*)::text || '|' || coalesce(sum(p."version"), 0)::text || '|' ||
+      coalesce(to_char(max(p."updated_at"), 'YYYY-MM-DD"T"HH24:MI:SS.US'), '')
+    FROM "parts" p WHERE p."shop_id" = $${shopParam})`;
+}
+
 interface CachedCatalogue {
   fingerprint: string;
   parts: readonly PartDto[];
@@ -12,10 +23,10 @@ interface CachedCatalogue {
 
 /**
  * A shop's whole catalogue in memory, for the list filters, the adapter solver and the rules
- * engine. Each read asks PostgreSQL for a cheap fingerprint (row count, sum of versions, latest
- * change), so writes from another process or the seed are seen too; writes through this process
- * also drop the entry at once. The same array is returned until the catalogue changes, which lets
- * the solver reuse its per-catalogue index.
+ * engine, one entry per shop. Each read compares a fresh fingerprint from PostgreSQL, so writes
+ * from another process or the seed are seen too; writes through this process also drop the entry
+ * at once. The same array is returned until the catalogue changes, which lets the solver reuse its
+ * per-catalogue index.
  */
 @Injectable()
 export class ShopCatalogueService {
@@ -24,7 +35,14 @@ export class ShopCatalogueService {
   constructor(@InjectRepository(PartEntity) private readonly parts: Repository<PartEntity>) {}
 
   async partsOf(shopId: string): Promise<readonly PartDto[]> {
-    const fingerprint = await this.fingerprintOf(shopId);
+    const [row] = (await this.parts.query(`SELECT ${catalogueFingerprintSql(1)} AS "fingerprint"`, [shopId])) as Array<{
+      fingerprint: string;
+    }>;
+    return this.partsAt(shopId, row?.fingerprint ?? '');
+  }
+
+  /** The shop's parts as of `fingerprint`, read just now with `catalogueFingerprintSql`. */
+  async partsAt(shopId: string, fingerprint: string): Promise<readonly PartDto[]> {
     const cached = this.cache.get(shopId);
     if (cached?.fingerprint === fingerprint) return cached.parts;
     // Read after the fingerprint: the rows are at least as new as it, so a race only costs a reload.
@@ -36,16 +54,5 @@ export class ShopCatalogueService {
 
   invalidate(shopId: string): void {
     this.cache.delete(shopId);
-  }
-
-  private async fingerprintOf(shopId: string): Promise<string> {
-    const row = await this.parts
-      .createQueryBuilder('part')
-      .select('count(*)::int', 'count')
-      .addSelect('coalesce(sum(part.version), 0)::bigint', 'versions')
-      .addSelect("coalesce(to_char(max(part.updatedAt), 'YYYY-MM-DD\"T\"HH24:MI:SS.US'), '')", 'latest')
-      .where('part.shopId = :shopId', { shopId })
-      .getRawOne<{ count: number; versions: string; latest: string }>();
-    return `${row?.count ?? 0}|${row?.versions ?? 0}|${row?.latest ?? ''}`;
   }
 }

@@ -1,12 +1,11 @@
 import { Module } from '@nestjs/common';
 import { PartsModule } from '../parts/parts.module.js';
 import { ShopRulesModule } from '../shop-rules/shop-rules.module.js';
-import { ShopsModule } from '../shops/shops.module.js';
 import { RulesController } from './rules.controller.js';
 import { RulesService } from './rules.service.js';
 
 @Module({
-  imports: [PartsModule, ShopRulesModule, ShopsModule],
+  imports: [PartsModule, ShopRulesModule],
   controllers: [RulesController],
   providers: [RulesService],
   exports: [RulesService],

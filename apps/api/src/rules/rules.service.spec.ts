@@ -1,9 +1,10 @@
 import { demoParts } from '@linesmith/catalog';
-import { circuitDocumentSchema, defaultShopRules, shopRulesSchema, type CircuitDocument } from '@linesmith/routing';
+import { circuitDocumentSchema, type CircuitDocument } from '@linesmith/routing';
 import { Test } from '@nestjs/testing';
+import { getDataSourceToken, getRepositoryToken } from '@nestjs/typeorm';
 import { ShopCatalogueService } from '../parts/shop-catalogue.service.js';
+import { ShopRulesEntity } from '../shop-rules/shop-rules.entity.js';
 import { ShopRulesService } from '../shop-rules/shop-rules.service.js';
-import { ShopsService } from '../shops/shops.service.js';
 import { partIdsOf, RulesService } from './rules.service.js';
 
 const SHOP = '11111111-1111-4111-8111-111111111111';
@@ -36,21 +37,22 @@ function line40(): CircuitDocument {
 
 describe('RulesService', () => {
   let service: RulesService;
-  const catalogue = { partsOf: jest.fn() };
-  const shopRules = { rulesOf: jest.fn() };
-  const shops = { getOwnShop: jest.fn() };
+  const catalogue = { partsAt: jest.fn() };
+  /** The one read of the shop's inputs: tax rate (numeric as text), saved rules as text, catalogue fingerprint. */
+  const dataSource = { query: jest.fn() };
+  const shopInputs = (taxRatePercent: string, rulesJson: string | null) => [{ taxRatePercent, rulesJson, catalogueFingerprint: '7|7|x' }];
 
   beforeEach(async () => {
     jest.resetAllMocks();
-    catalogue.partsOf.mockResolvedValue(demoParts);
-    shopRules.rulesOf.mockResolvedValue(defaultShopRules);
-    shops.getOwnShop.mockResolvedValue({ id: SHOP, taxRatePercent: 0 });
+    catalogue.partsAt.mockResolvedValue(demoParts);
+    dataSource.query.mockResolvedValue(shopInputs('0.000', null));
     const moduleRef = await Test.createTestingModule({
       providers: [
         RulesService,
+        ShopRulesService,
+        { provide: getRepositoryToken(ShopRulesEntity), useValue: {} },
         { provide: ShopCatalogueService, useValue: catalogue },
-        { provide: ShopRulesService, useValue: shopRules },
-        { provide: ShopsService, useValue: shops },
+        { provide: getDataSourceToken(), useValue: dataSource },
       ],
     }).compile();
     service = moduleRef.get(RulesService);
@@ -66,9 +68,9 @@ describe('RulesService', () => {
   });
 
   it("taxes the bill of materials at the shop profile's rate", async () => {
-    shops.getOwnShop.mockResolvedValue({ id: SHOP, taxRatePercent: 8.25 });
+    dataSource.query.mockResolvedValue(shopInputs('8.250', null));
     const { bom } = await service.evaluate(SHOP, line40());
-    expect(shops.getOwnShop).toHaveBeenCalledWith(SHOP);
+    expect(dataSource.query).toHaveBeenCalledWith(expect.any(String), [SHOP]);
     expect(bom.subtotalCents).toBeGreaterThan(0);
     // Plain arithmetic: 8.25 % of the subtotal, rounded to the cent.
     expect(bom.taxCents).toBe(Math.round(bom.subtotalCents * 0.0825));
@@ -77,16 +79,26 @@ describe('RulesService', () => {
 
   it("evaluates with the caller's catalogue and shop rules", async () => {
     const result = await service.evaluate(SHOP, line40());
-    expect(catalogue.partsOf).toHaveBeenCalledWith(SHOP);
-    expect(shopRules.rulesOf).toHaveBeenCalledWith(SHOP);
+    expect(catalogue.partsAt).toHaveBeenCalledWith(SHOP, '7|7|x');
     // 40 − (0.95 + 0.80) − 0.80 + max(1.5, 4 % × 40 = 1.6) = 39.05 → next 1/8 in: 39.125 (DOMAIN §4, common practice).
     expect(result.lines[0].slackIn).toBeCloseTo(1.6, 9);
     expect(result.lines[0].cutLengthIn).toBe(39.125);
 
     // A shop that wants at least 3 in of slack across mounts: 40 − 2.55 + 3 = 40.45 → 40.5.
-    shopRules.rulesOf.mockResolvedValue(shopRulesSchema.parse({ slackMinIn: 3 }));
+    dataSource.query.mockResolvedValue(shopInputs('0.000', JSON.stringify({ slackMinIn: 3 })));
     const roomy = await service.evaluate(SHOP, line40());
     expect(roomy.lines[0].cutLengthIn).toBe(40.5);
+
+    // Changed rules text is parsed afresh (the cache is keyed by the stored text, per shop).
+    dataSource.query.mockResolvedValue(shopInputs('0.000', JSON.stringify({ slackMinIn: 1 })));
+    const tight = await service.evaluate(SHOP, line40());
+    // 40 − 2.55 + max(1, 4 % × 40 = 1.6) = 39.05 → 39.125, as with the defaults.
+    expect(tight.lines[0].cutLengthIn).toBe(39.125);
+  });
+
+  it('answers not found for a shop that does not exist', async () => {
+    dataSource.query.mockResolvedValue([]);
+    await expect(service.evaluate(SHOP, line40())).rejects.toThrow(/shop/i);
   });
 
   it('still finds the clamps and seals the engine picks from the whole catalogue', async () => {

@@ -1,12 +1,33 @@
 import { Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
 import type { Part } from '@linesmith/catalog';
 import { evaluateCircuit, type CircuitDocument, type CircuitEvaluation } from '@linesmith/routing';
-import { ShopCatalogueService } from '../parts/shop-catalogue.service.js';
+import type { DataSource } from 'typeorm';
+import { NotFoundError } from '../common/errors/app-error.js';
+import { catalogueFingerprintSql, ShopCatalogueService } from '../parts/shop-catalogue.service.js';
 import { ShopRulesService } from '../shop-rules/shop-rules.service.js';
-import { ShopsService } from '../shops/shops.service.js';
 
 /** Kinds the engine picks from the whole catalogue by itself: clamps by hose OD, sleeves and seals for the bill of materials. */
 const PICKED_BY_THE_ENGINE = new Set<Part['kind']>(['clamp', 'sleeve', 'seal']);
+
+/**
+ * Everything of the shop a check depends on, fresh, in one round trip: the profile's tax rate, the
+ * saved rules as text and the catalogue fingerprint. The parsed rules and the parts come from
+ * per-shop caches keyed by those values, so nothing is stale and nothing is re-read unchanged.
+ */
+const SHOP_INPUTS_SQL = `
+  SELECT s."tax_rate_percent" AS "taxRatePercent",
+         r."rules"::text AS "rulesJson",
+         ${catalogueFingerprintSql(1)} AS "catalogueFingerprint"
+  FROM "shops" s LEFT JOIN "shop_rules" r ON r."shop_id" = s."id"
+  WHERE s."id" = $1`;
+
+interface ShopInputsRow {
+  /** numeric arrives as a string. */
+  taxRatePercent: string;
+  rulesJson: string | null;
+  catalogueFingerprint: string;
+}
 
 /** Every part id a circuit document names: hoses, end stacks, plugs and placed sleeves. */
 export function partIdsOf(doc: CircuitDocument): Set<string> {
@@ -26,7 +47,7 @@ export class RulesService {
   constructor(
     private readonly catalogue: ShopCatalogueService,
     private readonly shopRules: ShopRulesService,
-    private readonly shops: ShopsService,
+    @InjectDataSource() private readonly dataSource: DataSource,
   ) {}
 
   /**
@@ -34,13 +55,12 @@ export class RulesService {
    * shop does not own are simply unknown to the engine, which flags them.
    */
   async evaluate(shopId: string, doc: CircuitDocument): Promise<CircuitEvaluation> {
-    const [catalogue, rules, shop] = await Promise.all([
-      this.catalogue.partsOf(shopId),
-      this.shopRules.rulesOf(shopId),
-      this.shops.getOwnShop(shopId),
-    ]);
+    const [inputs] = (await this.dataSource.query(SHOP_INPUTS_SQL, [shopId])) as ShopInputsRow[];
+    if (!inputs) throw new NotFoundError('The shop');
+    const catalogue = await this.catalogue.partsAt(shopId, inputs.catalogueFingerprint);
+    const rules = this.shopRules.rulesFromStored(shopId, inputs.rulesJson);
     const named = partIdsOf(doc);
     const parts = catalogue.filter((part) => named.has(part.id) || PICKED_BY_THE_ENGINE.has(part.kind));
-    return evaluateCircuit(doc, parts, rules, { taxRatePercent: shop.taxRatePercent });
+    return evaluateCircuit(doc, parts, rules, { taxRatePercent: Number(inputs.taxRatePercent) });
   }
 }

@@ -10,11 +10,28 @@ import { ShopRulesEntity } from './shop-rules.entity.js';
 /** The shop's thresholds for the rules engine; a shop without a saved row runs on the defaults. */
 @Injectable()
 export class ShopRulesService {
+  /** The last parsed rules of each shop with the stored text they came from (never shared across shops). */
+  private readonly parsed = new Map<string, { json: string; rules: ShopRules }>();
+
   constructor(@InjectRepository(ShopRulesEntity) private readonly shopRules: Repository<ShopRulesEntity>) {}
 
   /** The rules the engine should use for this shop. */
   async rulesOf(shopId: string): Promise<ShopRules> {
     return (await this.get(shopId)).rules;
+  }
+
+  /**
+   * The rules stored as `json` (the jsonb column as text; null when the shop saved none), parsed
+   * once per distinct text: the check reads the text with its other inputs in one round trip.
+   */
+  rulesFromStored(shopId: string, json: string | null): ShopRules {
+    if (json === null) return defaultShopRules;
+    const hit = this.parsed.get(shopId);
+    if (hit?.json === json) return hit.rules;
+    // Parsed again on read: rules added to the schema later take their defaults in old rows.
+    const rules = shopRulesSchema.parse(JSON.parse(json));
+    this.parsed.set(shopId, { json, rules });
+    return rules;
   }
 
   async get(shopId: string): Promise<ShopRulesDto> {
