@@ -54,6 +54,9 @@ STEPS+=(api)
 
 check build-apps build_all
 export SMTP_PORT="${TEST_SMTP_PORT:-2625}" MAIL_DIR="$ROOT/artifacts/mail" APP_URL="http://127.0.0.1:$TEST_PORT"
+# The journeys sign in some 30 times within a minute from one address; the login limit itself is
+# covered by the API tests (rate-limit.e2e-spec.ts).
+export LOGIN_RATE_LIMIT=1000
 if migrate_and_seed "$DATABASE_URL" && start_fake_smtp "$SMTP_PORT" "$MAIL_DIR" "$ROOT/artifacts/fake-smtp.log" &&
   start_server "$TEST_PORT" "$DATABASE_URL" "$ROOT/artifacts/server.log"; then
   log "browser tests (playwright-core + Debian chromium) against http://127.0.0.1:$TEST_PORT"

@@ -16,7 +16,7 @@ export const demoUsers = {
 
 /** A fresh, isolated Chromium profile per call (the launcher refuses --user-data-dir in args). */
 export async function openBrowser(): Promise<BrowserContext> {
-  return chromium.launchPersistentContext(mkdtempSync(join(tmpdir(), 'linesmith-e2e-')), {
+  const context = await chromium.launchPersistentContext(mkdtempSync(join(tmpdir(), 'linesmith-e2e-')), {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
     viewport: { width: 1366, height: 860 },
@@ -30,6 +30,9 @@ export async function openBrowser(): Promise<BrowserContext> {
       '--disable-sync',
     ],
   });
+  // A step that waits in vain fails with its locator named, well before the test's own time-out.
+  context.setDefaultTimeout(20_000);
+  return context;
 }
 
 export async function signIn(page: Page, email: string, password = demoPassword): Promise<void> {

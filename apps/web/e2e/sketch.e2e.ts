@@ -1,5 +1,7 @@
 import type { BrowserContext, Locator, Page } from 'playwright-core';
+import { evaluateCircuit, formatLength, type CircuitDocument } from '@linesmith/routing';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { api, apiSignIn, catalogue, copyOfDemoCircuit, runTag, shopRules, type ApiSession, type CircuitRef } from './api-setup';
 import { baseUrl, demoUsers, openBrowser, screenshot, signIn } from './browser';
 
 /** Screen position of a sketch point, from the view transform the canvas publishes. */
@@ -14,10 +16,10 @@ async function clickSketch(page: Page, canvas: Locator, x: number, y: number): P
   await page.mouse.click(p.x, p.y);
 }
 
-async function openTransmissionCooler(page: Page): Promise<Locator> {
-  await page.goto(`${baseUrl}/builds`);
-  await page.getByRole('link', { name: /Redfern/ }).first().click();
-  await page.getByRole('link', { name: 'Transmission cooler' }).first().click();
+/** Opens the circuit from its build page, as the fabricator does, and brings the canvas on screen. */
+async function openCircuit(page: Page, circuit: CircuitRef): Promise<Locator> {
+  await page.goto(`${baseUrl}/builds/${circuit.buildId}`);
+  await page.getByRole('link', { name: circuit.name }).click();
   const canvas = page.getByRole('application', { name: 'Sketch canvas' });
   await canvas.waitFor();
   // The canvas sits under the circuit's header: bring all of it on screen before clicking on it.
@@ -25,33 +27,34 @@ async function openTransmissionCooler(page: Page): Promise<Locator> {
   return canvas;
 }
 
-// The demo's transmission-cooler sketch (seed): transmission at (320, 420) with its return port at
-// (+48, +24) — it feeds the gear train's lubrication and needs a long-nose fitting — and the cooler at
-// (660, 160) with its outlet at (−60, +20).
+// A fresh copy of the demo's transmission-cooler starter sketch (seed): transmission at (320, 420)
+// with its return port at (+48, +24) — it feeds the gear train's lubrication and needs a long-nose
+// fitting — and the cooler at (660, 160) with its outlet at (−60, +20). No lines, no scale yet.
 const returnPort = { x: 368, y: 444 };
+const corners = [
+  { x: 480, y: 444 },
+  { x: 480, y: 180 },
+];
 const coolerOutlet = { x: 600, y: 180 };
 
-describe('sketching the transmission-cooler circuit', () => {
+describe('fabricator: sketching a transmission-cooler circuit', () => {
   let context: BrowserContext;
+  let fabricator: ApiSession;
+  let circuit: CircuitRef;
   beforeAll(async () => {
+    fabricator = await apiSignIn(demoUsers.fabricator);
+    circuit = await copyOfDemoCircuit(fabricator, 'Transmission cooler', `Transmission cooler ${runTag()}`);
     context = await openBrowser();
   });
   afterAll(async () => {
     await context?.close();
   });
 
-  it('calibrates, places a cooler, draws a line with two bends, picks parts, reads the cut length, and finds it saved', async () => {
+  it('calibrates, places a unit, draws a line with two bends, picks parts, fixes the port flag, checks the cut length, saves a version and submits', async () => {
     const page = await context.newPage();
     await signIn(page, demoUsers.fabricator);
-    await page.getByRole('navigation').first().waitFor();
-    let canvas = await openTransmissionCooler(page);
-    // A draft left by an earlier run keeps its lines: clear them so both ports are free again.
-    const outline = page.getByRole('listbox', { name: 'Sketch items' });
-    await outline.waitFor();
-    while ((await outline.getByRole('option', { name: /^Line \d+:/ }).count()) > 0) {
-      await outline.getByRole('option', { name: /^Line \d+:/ }).first().click();
-      await page.getByRole('button', { name: 'Delete line' }).click();
-    }
+    await page.getByRole('navigation', { name: 'Sections' }).waitFor();
+    let canvas = await openCircuit(page, circuit);
     await page.keyboard.press('f');
     await canvas.evaluate((el) => el.scrollIntoView({ block: 'center' }));
 
@@ -66,39 +69,93 @@ describe('sketching the transmission-cooler circuit', () => {
 
     // Place a second cooler from the palette; it arrives selected in the inspector.
     await page.getByRole('button', { name: 'Place cooler' }).click();
-    await page.getByRole('region', { name: 'Inspector' }).getByText('Ports (2)').waitFor();
+    const inspector = page.getByRole('region', { name: 'Inspector' });
+    await inspector.getByText('Ports (2)').waitFor();
 
     // Draw: return port → two corners → cooler outlet.
     await page.keyboard.press('l');
-    await clickSketch(page, canvas, returnPort.x, returnPort.y);
-    await clickSketch(page, canvas, 480, 444);
-    await clickSketch(page, canvas, 480, 180);
-    await clickSketch(page, canvas, coolerOutlet.x, coolerOutlet.y);
-    const inspector = page.getByRole('region', { name: 'Inspector' });
+    for (const p of [returnPort, ...corners, coolerOutlet]) await clickSketch(page, canvas, p.x, p.y);
     await inspector.getByRole('region', { name: 'Corners' }).waitFor();
     expect(await inspector.getByRole('region', { name: 'Corners' }).getByRole('listitem').count()).toBe(2);
 
-    // Hose rated for ATF at the circuit's pressure and heat, then an end stack per end from the suggestions.
-    await inspector.getByRole('combobox', { name: 'Hose', exact: true }).selectOption({ label: '-6 CPE-lined braided rubber hose' });
-    const fromSuggestions = inspector.getByRole('list', { name: /Suggestions for Four-speed automatic/ });
-    await fromSuggestions.getByRole('button', { name: /long-nose/ }).first().click();
-    const toSuggestions = inspector.getByRole('list', { name: /Suggestions for Transmission cooler/ });
-    await toSuggestions.getByRole('button').first().click();
-    await page.waitForFunction(() => !document.querySelector('[data-flag-code="port-requirement"]'));
+    // Nothing sits in the lubrication port yet: the check raises the port-requirement blocker.
+    const portFlag = page.locator('[data-flag-code="port-requirement"]');
+    await portFlag.first().waitFor();
+    await screenshot(page, 'sketch-1-port-flag');
 
-    const cutRow = inspector.getByRole('row', { name: /Cut length \(rounded up\)/ });
-    await expect.poll(async () => (await cutRow.textContent()) ?? '').toMatch(/\d+(-\d+\/\d+)?"/);
-    const cut = (await cutRow.textContent())!.replace('Cut length (rounded up)', '').trim();
+    // Hose rated for ATF at the circuit's pressure and heat; the flag's fix is the long-nose end stack from
+    // the suggestions at the transmission, then the first suggestion at the cooler.
+    await inspector.getByRole('combobox', { name: 'Hose', exact: true }).selectOption({ label: '-6 CPE-lined braided rubber hose' });
+    await portFlag.first().click();
+    await inspector.getByRole('list', { name: /Suggestions for Four-speed automatic/ }).getByRole('button', { name: /long-nose/ }).first().click();
+    await inspector.getByRole('list', { name: /Suggestions for Transmission cooler/ }).getByRole('button').first().click();
+    await expect.poll(() => portFlag.count(), { timeout: 10_000 }).toBe(0);
+
+    const cutRow = () => page.getByRole('region', { name: 'Inspector' }).getByRole('row', { name: /Cut length \(rounded up\)/ });
+    await expect.poll(async () => (await cutRow().textContent()) ?? '').toMatch(/\d+(-\d+\/\d+)?"/);
+    const cutText = (await cutRow().textContent())!.replace('Cut length (rounded up)', '').trim();
     await page.getByRole('status', { name: 'Save state' }).getByText('✓ Saved', { exact: true }).waitFor({ timeout: 15_000 });
-    await screenshot(page, 'sketch-transmission-cooler');
+    await screenshot(page, 'sketch-2-line-and-parts');
+
+    // The saved draft, evaluated here with the routing library, gives the cut length on screen.
+    const [{ document }, parts, rules] = await Promise.all([
+      api<{ document: CircuitDocument }>(fabricator, 'GET', `/circuits/${circuit.id}/draft`),
+      catalogue(fabricator),
+      shopRules(fabricator),
+    ]);
+    expect(document.lines).toHaveLength(1);
+    const [report] = evaluateCircuit(document, parts, rules).lines;
+    expect(formatLength(report.cutLengthIn!, 'in')).toBe(cutText);
+    // Drawn length, by hand: clicked points land within a pixel of their aim; the polyline port → corners →
+    // port (Euclidean distances) over the saved scale is about 496 px at 20 px per inch = 24.8 in.
+    const line = document.lines[0];
+    line.points.forEach((p, i) => expect(Math.hypot(p.x - corners[i].x, p.y - corners[i].y)).toBeLessThan(1));
+    const { a, b, knownIn } = document.calibration!;
+    const pxPerIn = Math.hypot(b.x - a.x, b.y - a.y) / knownIn;
+    expect(pxPerIn).toBeCloseTo(20, 1);
+    const path = [returnPort, ...line.points, coolerOutlet];
+    const drawnPx = path.slice(1).reduce((sum, p, i) => sum + Math.hypot(p.x - path[i].x, p.y - path[i].y), 0);
+    expect(report.drawnLengthIn).toBeCloseTo(drawnPx / pxPerIn, 6);
+    expect(report.drawnLengthIn).toBeCloseTo(24.8, 1);
+    // Cut long, never short: rounded up to the next 1/8 in (common practice; the shop's cut rounding).
+    expect(report.cutLengthIn! * 8).toBeCloseTo(Math.round(report.cutLengthIn! * 8), 9);
+    expect(report.cutLengthIn!).toBeGreaterThanOrEqual(report.exactCutIn!);
+    expect(report.cutLengthIn! - report.exactCutIn!).toBeLessThan(0.125);
+
+    // Units: in millimetres the same cut reads 25.4 mm to the inch (exact by definition since 1959).
+    // (A click on a radio item closes the menu; Escape would reach the sketch and clear the selection.)
+    await page.getByRole('button', { name: /^Units:/ }).click();
+    await page.getByRole('menuitemradio', { name: 'Millimetres' }).click();
+    await expect.poll(async () => (await cutRow().textContent()) ?? '').toContain(`${Math.round(report.cutLengthIn! * 25.4)} mm`);
+    await screenshot(page, 'sketch-3-millimetres');
+    await page.getByRole('button', { name: /^Units:/ }).click();
+    await page.getByRole('menuitemradio', { name: 'Inches (fractions)' }).click();
+    await expect.poll(async () => (await cutRow().textContent()) ?? '').toContain(cutText);
 
     // Reload: the line, its parts and its cut length come back from the saved draft.
     await page.reload();
     canvas = page.getByRole('application', { name: 'Sketch canvas' });
     await canvas.waitFor();
     await page.getByRole('option', { name: /^Line 1:/ }).click();
-    await expect.poll(async () => (await page.getByRole('row', { name: /Cut length \(rounded up\)/ }).textContent()) ?? '').toContain(cut);
-    expect(await page.locator('[data-flag-code="port-requirement"]').count()).toBe(0);
+    await expect.poll(async () => (await cutRow().textContent()) ?? '').toContain(cutText);
+    expect(await portFlag.count()).toBe(0);
+
+    // Save a version, then submit the circuit for review.
+    await page.getByRole('button', { name: 'Save version' }).click();
+    const version = page.getByRole('dialog', { name: 'Save version' });
+    await version.getByLabel('What changed').fill('Cooler return line drawn, long-nose fitting in the lubrication port.');
+    await version.getByRole('button', { name: 'Save version' }).click();
+    await page.getByText('Saved as version 1.').waitFor();
+    await page.getByRole('button', { name: 'Submit for review' }).click();
+    const submit = page.getByRole('dialog');
+    await submit.getByRole('textbox').fill('Ready for a look: one line, clamps still to place.');
+    await submit.getByRole('button', { name: 'Submit', exact: true }).click();
+    await page.getByText('In review').first().waitFor();
+    await screenshot(page, 'sketch-4-submitted');
+    const after = await api<{ status: string }>(fabricator, 'GET', `/circuits/${circuit.id}`);
+    expect(after.status).toBe('in-review');
+    const revisions = await api<Array<{ number: number }>>(fabricator, 'GET', `/circuits/${circuit.id}/revisions`);
+    expect(revisions.map((r) => r.number).sort()).toEqual([1, 2]);
     await page.close();
   });
 });
