@@ -11,18 +11,19 @@ import { ShopRulesService } from '../shop-rules/shop-rules.service.js';
 const PICKED_BY_THE_ENGINE = new Set<Part['kind']>(['clamp', 'sleeve', 'seal']);
 
 /**
- * Everything of the shop a check depends on, fresh, in one round trip: the profile's tax rate, the
- * saved rules as text and the catalogue fingerprint. The parsed rules and the parts come from
- * per-shop caches keyed by those values, so nothing is stale and nothing is re-read unchanged.
+ * Everything of the shop (id in `$1`) a check depends on, fresh, in one round trip: the profile's
+ * tax rate, the saved rules as text and the catalogue fingerprint. The parsed rules and the parts
+ * come from per-shop caches keyed by those values, so nothing is stale and nothing is re-read
+ * unchanged. The check of a stored draft embeds it next to the draft read.
  */
-const SHOP_INPUTS_SQL = `
+export const SHOP_INPUTS_SQL = `
   SELECT s."tax_rate_percent" AS "taxRatePercent",
          r."rules"::text AS "rulesJson",
          ${catalogueFingerprintSql(1)} AS "catalogueFingerprint"
   FROM "shops" s LEFT JOIN "shop_rules" r ON r."shop_id" = s."id"
   WHERE s."id" = $1`;
 
-interface ShopInputsRow {
+export interface ShopInputsRow {
   /** numeric arrives as a string. */
   taxRatePercent: string;
   rulesJson: string | null;
@@ -57,6 +58,11 @@ export class RulesService {
   async evaluate(shopId: string, doc: CircuitDocument): Promise<CircuitEvaluation> {
     const [inputs] = (await this.dataSource.query(SHOP_INPUTS_SQL, [shopId])) as ShopInputsRow[];
     if (!inputs) throw new NotFoundError('The shop');
+    return this.evaluateWith(shopId, doc, inputs);
+  }
+
+  /** As `evaluate`, with the shop's inputs already read by `SHOP_INPUTS_SQL` in the caller's query. */
+  async evaluateWith(shopId: string, doc: CircuitDocument, inputs: ShopInputsRow): Promise<CircuitEvaluation> {
     const catalogue = await this.catalogue.partsAt(shopId, inputs.catalogueFingerprint);
     const rules = this.shopRules.rulesFromStored(shopId, inputs.rulesJson);
     const named = partIdsOf(doc);
