@@ -29,7 +29,8 @@ function buildsApi(builds: BuildBody[] = allBuilds) {
 }
 
 async function customerColumn() {
-  const table = await screen.findByRole('table', { name: 'Builds' });
+  // The first render loads the lazy route; a busy machine needs more than the default second.
+  const table = await screen.findByRole('table', { name: 'Builds' }, { timeout: 5000 });
   return within(table)
     .getAllByRole('row')
     .slice(1)
