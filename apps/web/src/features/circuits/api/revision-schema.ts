@@ -7,7 +7,7 @@ import { circuitDocumentField } from './circuit-document-field';
 const revisionFields = {
   id: z.string().min(1),
   number: z.number().int().positive(),
-  message: z.string().nullish().transform((v) => v ?? ''),
+  message: z.string(),
   author: userRefSchema.nullable(),
   createdAt: z.iso.datetime({ offset: true }),
 };
