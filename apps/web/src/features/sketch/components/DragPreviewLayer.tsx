@@ -1,10 +1,10 @@
-import type { LineReport } from '@linesmith/routing';
+import type { Flag, LineReport } from '@linesmith/routing';
 import { useMemo } from 'react';
 import { Layer } from 'react-konva';
 import { useEditor } from '../hooks/editor-context';
 import { useEditorState } from '../hooks/useEditorState';
-import { flagFollowsDrag, previewDocument, type DragFootprint } from '../model/drag-preview';
-import { routePx } from '../model/geometry/line-route';
+import { previewDocument, type DragFootprint } from '../model/drag-preview';
+import { lineEnds, routePx, unitsById } from '../model/geometry/line-route';
 import { isSelected, type Selection } from '../model/selection';
 import { cutLengthLabel } from '../utils/cut-length-label';
 import { flagPosition } from '../utils/flag-target';
@@ -20,6 +20,8 @@ import { UnitShape } from './shapes/UnitShape';
 export interface DragPreviewLayerProps {
   /** What the drag moves; the canvas leaves these items out of its own layers meanwhile. */
   footprint: DragFootprint;
+  /** The flags whose markers move with the drag. */
+  flags: ReadonlySet<Flag>;
   selection: Selection;
   zoom: number;
   pxPerIn: number | null;
@@ -34,11 +36,12 @@ const none = () => undefined;
  * The items a drag moves, drawn where they would be dropped, on a layer of their own: per pointer
  * move only this layer re-renders and redraws, the rest of the sketch stays as it was.
  */
-export function DragPreviewLayer({ footprint, selection, zoom, pxPerIn, fluid, reports, connectedPorts }: DragPreviewLayerProps) {
-  const { store, evaluation, lengthUnit, shopRules } = useEditor();
+export function DragPreviewLayer({ footprint, flags, selection, zoom, pxPerIn, fluid, reports, connectedPorts }: DragPreviewLayerProps) {
+  const { store, lengthUnit, shopRules } = useEditor();
   const drag = useEditorState(store, (s) => s.drag);
   const doc = useEditorState(store, (s) => s.history.doc);
   const shown = useMemo(() => (drag ? previewDocument(doc, drag) : doc), [doc, drag]);
+  const units = useMemo(() => unitsById(shown), [shown]);
   const lines = shown.lines.filter((l) => footprint.lines.has(l.id));
   return (
     <Layer listening={false}>
@@ -61,7 +64,7 @@ export function DragPreviewLayer({ footprint, selection, zoom, pxPerIn, fluid, r
       {lines.map((line) => (
         <LineShape
           key={line.id}
-          doc={shown}
+          {...lineEnds(units, line)}
           line={line}
           report={reports.get(line.id)}
           pxPerIn={pxPerIn}
@@ -115,8 +118,7 @@ export function DragPreviewLayer({ footprint, selection, zoom, pxPerIn, fluid, r
         const text = cutLengthLabel(reports.get(line.id), lengthUnit);
         return <DimensionLabel key={line.id} x={at.x + 6 / zoom} y={at.y + 6 / zoom} text={text} style={fluid} zoom={zoom} />;
       })}
-      {evaluation.flags.map((flag, i) => {
-        if (!flagFollowsDrag(doc, flag, footprint)) return null;
+      {[...flags].map((flag, i) => {
         const at = flagPosition(shown, flag);
         if (!at) return null;
         return (

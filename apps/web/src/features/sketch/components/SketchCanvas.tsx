@@ -1,4 +1,4 @@
-import { portPosition } from '@linesmith/routing';
+import { portPosition, type Flag } from '@linesmith/routing';
 import type Konva from 'konva';
 import type { KonvaEventObject } from 'konva/lib/Node';
 import { forwardRef, useCallback, useEffect, useImperativeHandle, useMemo, useRef, useState } from 'react';
@@ -10,9 +10,9 @@ import { addHeatZone } from '../model/commands/add-heat-zone';
 import { addLine } from '../model/commands/add-line';
 import { addSupport } from '../model/commands/add-support';
 import { removeCorner } from '../model/commands/remove-corner';
-import { dragFootprint, flagFollowsDrag, type DragTarget } from '../model/drag-preview';
+import { dragFootprint, flagsFollowingDrag, type DragTarget } from '../model/drag-preview';
 import { sketchScale } from '../model/geometry/calibration';
-import { distanceAlongLine, linePathIn, nearestSegment, routePx } from '../model/geometry/line-route';
+import { distanceAlongLine, lineEnds, linePathIn, nearestSegment, routePx, unitsById } from '../model/geometry/line-route';
 import { findPortNear, PORT_SNAP_SCREEN_PX, portTaken } from '../model/geometry/snap-to-port';
 import { isSelected, sameItem, type SelectedItem, type Selection } from '../model/selection';
 import type { Point } from '../model/tools';
@@ -41,6 +41,7 @@ export interface SketchCanvasHandle {
 }
 
 const ZOOM_STEP = 1.15;
+const emptyFlags: ReadonlySet<Flag> = new Set();
 
 /** The react-konva stage: it renders the document and turns pointer input into commands. */
 export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(function SketchCanvas(
@@ -79,8 +80,13 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
     [doc.lines],
   );
   const zoom = view.zoom;
+  const unitLookup = useMemo(() => unitsById(doc), [doc]);
   // While a drag runs its items are drawn by the drag-preview layer and left out here.
   const footprint = useMemo(() => (dragTarget ? dragFootprint(doc, dragTarget) : null), [doc, dragTarget]);
+  const draggedFlags = useMemo(
+    () => (footprint ? flagsFollowingDrag(doc, evaluation.flags, footprint) : null),
+    [doc, evaluation, footprint],
+  );
 
   const pointer = (): Point | null => {
     const stage = stageRef.current;
@@ -103,15 +109,33 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
   );
 
   // --- Drags: a preview while the pointer moves, one history step on drop ---------------------
-  const dragSelectionFor = (item: SelectedItem): Selection => {
-    const current = store.getState().selection;
-    if (isSelected(current, item)) return current;
-    store.select([item]);
-    return [item];
-  };
-  const startDrag = (label: string, target: DragTarget) => store.startDrag(label, target);
-  const dragTo = (dx: number, dy: number) => store.dragTo(dx, dy);
-  const endDrag = () => store.endDrag();
+  // The handlers every shape shares take the item's id, so they stay the same from render to render
+  // and a memoised shape re-renders only when its own data changes.
+  const handlers = useMemo(() => {
+    const dragSelectionFor = (item: SelectedItem): Selection => {
+      const current = store.getState().selection;
+      if (isSelected(current, item)) return current;
+      store.select([item]);
+      return [item];
+    };
+    return {
+      selectUnit: (id: string, e: KonvaEventObject<MouseEvent>) => choose({ kind: 'unit', id }, e),
+      selectPort: (unitId: string, id: string, e: KonvaEventObject<MouseEvent>) => choose({ kind: 'port', unitId, id }, e),
+      selectLine: (id: string, e: KonvaEventObject<MouseEvent>) => choose({ kind: 'line', id }, e),
+      selectZone: (id: string, e: KonvaEventObject<MouseEvent>) => choose({ kind: 'zone', id }, e),
+      dragUnit: (id: string) => store.startDrag('Move unit', { kind: 'selection', selection: dragSelectionFor({ kind: 'unit', id }) }),
+      dragZone: (id: string) => store.startDrag('Move heat zone', { kind: 'selection', selection: dragSelectionFor({ kind: 'zone', id }) }),
+      dragCorner: (target: Extract<DragTarget, { kind: 'corner' }>) => store.startDrag('Move corner', target),
+      dragTo: (dx: number, dy: number) => store.dragTo(dx, dy),
+      drop: () => store.endDrag(),
+      addCornerAt: (lineId: string, p: Point) => {
+        const current = store.getState().history.doc;
+        const line = current.lines.find((l) => l.id === lineId);
+        const route = line && routePx(current, line);
+        if (route) store.run(addCorner, { lineId, index: nearestSegment(route, p).index, x: p.x, y: p.y });
+      },
+    };
+  }, [store, choose]);
 
   const onStageMouseDown = (e: KonvaEventObject<MouseEvent>) => {
     const screen = stageRef.current?.getPointerPosition();
@@ -284,29 +308,25 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
             draggable={draggable}
             hidden={footprint?.zones.has(zone.id)}
             clearancePx={zoneClearancePx(zone, pxPerIn, shopRules)}
-            onSelect={(e) => choose({ kind: 'zone', id: zone.id }, e)}
-            onDragStart={() => startDrag('Move heat zone', { kind: 'selection', selection: dragSelectionFor({ kind: 'zone', id: zone.id }) })}
-            onDragMove={dragTo}
-            onDragEnd={endDrag}
+            onSelect={handlers.selectZone}
+            onDragStart={handlers.dragZone}
+            onDragMove={handlers.dragTo}
+            onDragEnd={handlers.drop}
           />
         ))}
         {doc.lines.map((line) => (
           <LineShape
             key={line.id}
-            doc={doc}
             line={line}
+            {...lineEnds(unitLookup, line)}
             report={reports.get(line.id)}
             pxPerIn={pxPerIn}
             fluid={style}
             zoom={zoom}
             selected={selectedLineIds.has(line.id)}
             hidden={footprint?.lines.has(line.id)}
-            onSelect={(e) => choose({ kind: 'line', id: line.id }, e)}
-            onDoubleClick={(p) => {
-              const route = routePx(doc, line);
-              if (!route) return;
-              store.run(addCorner, { lineId: line.id, index: nearestSegment(route, p).index, x: p.x, y: p.y });
-            }}
+            onSelect={handlers.selectLine}
+            onDoubleClick={handlers.addCornerAt}
           />
         ))}
         {doc.units.map((unit) => (
@@ -319,11 +339,11 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
             connectedPorts={connected}
             draggable={draggable}
             hidden={footprint?.units.has(unit.id)}
-            onSelect={(e) => choose({ kind: 'unit', id: unit.id }, e)}
-            onSelectPort={(portId, e) => choose({ kind: 'port', unitId: unit.id, id: portId }, e)}
-            onDragStart={() => startDrag('Move unit', { kind: 'selection', selection: dragSelectionFor({ kind: 'unit', id: unit.id }) })}
-            onDragMove={dragTo}
-            onDragEnd={endDrag}
+            onSelect={handlers.selectUnit}
+            onSelectPort={handlers.selectPort}
+            onDragStart={handlers.dragUnit}
+            onDragMove={handlers.dragTo}
+            onDragEnd={handlers.drop}
           />
         ))}
         {doc.lines
@@ -345,9 +365,9 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
                   }
                   store.select([{ kind: 'line', id: line.id }, { kind: 'corner', lineId: line.id, index }]);
                 }}
-                onDragStart={() => startDrag('Move corner', { kind: 'corner', lineId: line.id, index, from: { x: p.x, y: p.y } })}
-                onDragMove={dragTo}
-                onDragEnd={endDrag}
+                onDragStart={() => handlers.dragCorner({ kind: 'corner', lineId: line.id, index, from: { x: p.x, y: p.y } })}
+                onDragMove={handlers.dragTo}
+                onDragEnd={handlers.drop}
               />
             )),
           )}
@@ -370,7 +390,7 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
           );
         })}
         {evaluation.flags.map((flag, i) => {
-          if (footprint && flagFollowsDrag(doc, flag, footprint)) return null;
+          if (draggedFlags?.has(flag)) return null;
           const at = flagPosition(doc, flag);
           if (!at) return null;
           const item = flagItem(flag);
@@ -390,6 +410,7 @@ export const SketchCanvas = forwardRef<SketchCanvasHandle, SketchCanvasProps>(fu
       {footprint && (
         <DragPreviewLayer
           footprint={footprint}
+          flags={draggedFlags ?? emptyFlags}
           selection={selection}
           zoom={zoom}
           pxPerIn={pxPerIn}

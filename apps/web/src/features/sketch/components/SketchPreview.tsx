@@ -4,6 +4,7 @@ import { Layer, Stage } from 'react-konva';
 import { useUnitPreferences } from '../../preferences/hooks/useUnitPreferences';
 import { sketchScale } from '../model/geometry/calibration';
 import { contentBounds } from '../model/geometry/content-bounds';
+import { lineEnds, unitsById } from '../model/geometry/line-route';
 import { fitView } from '../model/view';
 import { cutLengthLabel } from '../utils/cut-length-label';
 import { flagPosition } from '../utils/flag-target';
@@ -38,6 +39,7 @@ export function SketchPreview({ document: doc, evaluation, highlightIds = [], wi
   const zoom = view.zoom;
   const pxPerIn = sketchScale(doc);
   const style = fluidStyle(doc.circuit.fluid);
+  const unitLookup = useMemo(() => unitsById(doc), [doc]);
   const highlighted = useMemo(() => new Set(highlightIds), [highlightIds]);
   const reports = useMemo(() => new Map((evaluation?.lines ?? []).map((r) => [r.lineId, r])), [evaluation]);
   const connected = useMemo(
@@ -73,7 +75,7 @@ export function SketchPreview({ document: doc, evaluation, highlightIds = [], wi
           {doc.lines.map((line) => (
             <LineShape
               key={line.id}
-              doc={doc}
+              {...lineEnds(unitLookup, line)}
               line={line}
               report={reports.get(line.id)}
               pxPerIn={pxPerIn}

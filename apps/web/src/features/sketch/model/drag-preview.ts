@@ -77,12 +77,16 @@ export function dropDrag(history: DocumentHistory, drag: DragPreview): DocumentH
   return endGesture(moved);
 }
 
-/** True when a flag's marker follows the drag (the same lookup as flagPosition: line, then unit, then zone). */
-export function flagFollowsDrag(doc: CircuitDocument, flag: Flag, footprint: DragFootprint): boolean {
-  const t = flag.target;
-  const lineId = t.kind === 'line' ? t.id : t.lineId;
-  if (lineId && doc.lines.some((l) => l.id === lineId)) return footprint.lines.has(lineId);
-  const unitId = t.kind === 'unit' ? t.id : t.unitId;
-  if (unitId && doc.units.some((u) => u.id === unitId)) return footprint.units.has(unitId);
-  return t.kind === 'zone' && footprint.zones.has(t.id);
+/** The flags whose markers follow the drag (the same lookup as flagPosition: line, then unit, then zone). */
+export function flagsFollowingDrag(doc: CircuitDocument, flags: readonly Flag[], footprint: DragFootprint): ReadonlySet<Flag> {
+  const lines = new Set(doc.lines.map((l) => l.id));
+  const units = new Set(doc.units.map((u) => u.id));
+  const follows = (t: Flag['target']): boolean => {
+    const lineId = t.kind === 'line' ? t.id : t.lineId;
+    if (lineId && lines.has(lineId)) return footprint.lines.has(lineId);
+    const unitId = t.kind === 'unit' ? t.id : t.unitId;
+    if (unitId && units.has(unitId)) return footprint.units.has(unitId);
+    return t.kind === 'zone' && footprint.zones.has(t.id);
+  };
+  return new Set(flags.filter((f) => follows(f.target)));
 }

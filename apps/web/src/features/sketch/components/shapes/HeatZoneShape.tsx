@@ -1,6 +1,7 @@
 import type { HeatZone } from '@linesmith/routing';
 import type { Context } from 'konva/lib/Context';
 import type { KonvaEventObject } from 'konva/lib/Node';
+import { memo } from 'react';
 import { Group, Line, Text } from 'react-konva';
 import { pinnedDrag } from './pinned-drag';
 
@@ -13,8 +14,8 @@ export interface HeatZoneShapeProps {
   zoom: number;
   /** Clearance drawn around the zone, in sketch pixels (null without calibration). */
   clearancePx: number | null;
-  onSelect(event: KonvaEventObject<MouseEvent>): void;
-  onDragStart(): void;
+  onSelect(zoneId: string, event: KonvaEventObject<MouseEvent>): void;
+  onDragStart(zoneId: string): void;
   /** The pointer's travel since the drag started, in sketch pixels (the zone itself stays put). */
   onDragMove(dx: number, dy: number): void;
   onDragEnd(): void;
@@ -23,7 +24,8 @@ export interface HeatZoneShapeProps {
 const HATCH_GAP = 10;
 
 /** A heat zone: red outline, red hatching clipped to the polygon, its label, and its clearance. */
-export function HeatZoneShape({ zone, selected, draggable, hidden = false, zoom, clearancePx, ...handlers }: HeatZoneShapeProps) {
+export const HeatZoneShape = memo(function HeatZoneShape(props: HeatZoneShapeProps) {
+  const { zone, selected, draggable, hidden = false, zoom, clearancePx, onSelect, onDragStart, onDragMove, onDragEnd } = props;
   const flat = zone.polygon.flatMap((p) => [p.x, p.y]);
   const xs = zone.polygon.map((p) => p.x);
   const ys = zone.polygon.map((p) => p.y);
@@ -39,7 +41,7 @@ export function HeatZoneShape({ zone, selected, draggable, hidden = false, zoom,
     <Group
       visible={!hidden}
       draggable={draggable}
-      {...pinnedDrag(handlers)}
+      {...pinnedDrag({ onDragStart: () => onDragStart(zone.id), onDragMove, onDragEnd })}
       name="zone"
     >
       {clearancePx !== null && clearancePx > 0 && (
@@ -56,7 +58,7 @@ export function HeatZoneShape({ zone, selected, draggable, hidden = false, zoom,
         fill="rgba(220, 38, 38, 0.12)"
         stroke={selected ? '#2563eb' : '#dc2626'}
         strokeWidth={(selected ? 3 : 2) / zoom}
-        onClick={handlers.onSelect}
+        onClick={(e) => onSelect(zone.id, e)}
        
       />
       <Text
@@ -70,4 +72,4 @@ export function HeatZoneShape({ zone, selected, draggable, hidden = false, zoom,
       />
     </Group>
   );
-}
+});

@@ -1,6 +1,6 @@
-import type { CircuitDocument, CircuitLine, LineReport } from '@linesmith/routing';
+import type { CircuitLine, CircuitUnit, LineReport } from '@linesmith/routing';
 import type { KonvaEventObject } from 'konva/lib/Node';
-import { Fragment } from 'react';
+import { Fragment, memo } from 'react';
 import { Group, Line } from 'react-konva';
 import { linePathIn, pathPoints, positionAlong, routePx, type LinePathIn } from '../../model/geometry/line-route';
 import type { Point } from '../../model/tools';
@@ -10,8 +10,10 @@ import { SleeveBand } from './SleeveBand';
 import { SupportMark } from './SupportMark';
 
 export interface LineShapeProps {
-  doc: CircuitDocument;
   line: CircuitLine;
+  /** The units at the line's ends (one unit when both ends are on it); a moved unit redraws only its lines. */
+  from: CircuitUnit | undefined;
+  to: CircuitUnit | undefined;
   report: LineReport | undefined;
   pxPerIn: number | null;
   fluid: FluidStyle;
@@ -21,8 +23,8 @@ export interface LineShapeProps {
   zoom: number;
   /** Draws the cut-length label with the line; the editor leaves it out and draws labels above the units. */
   label?: string;
-  onSelect(event: KonvaEventObject<MouseEvent>): void;
-  onDoubleClick(point: Point): void;
+  onSelect(lineId: string, event: KonvaEventObject<MouseEvent>): void;
+  onDoubleClick(lineId: string, point: Point): void;
 }
 
 /** Sketch points along [startIn, endIn] of the line, for sleeves. */
@@ -45,7 +47,9 @@ export function labelPosition(route: readonly Point[]): Point {
 }
 
 /** A line: its route with bends in the fluid-class colour, sleeves and supports (its label is drawn on top, see DimensionLabel). */
-export function LineShape({ doc, line, report, pxPerIn, fluid, selected, hidden = false, zoom, label, onSelect, onDoubleClick }: LineShapeProps) {
+export const LineShape = memo(function LineShape(props: LineShapeProps) {
+  const { line, from, to, report, pxPerIn, fluid, selected, hidden = false, zoom, label, onSelect, onDoubleClick } = props;
+  const doc = { units: [from, to].filter((u): u is CircuitUnit => u !== undefined) };
   const route = routePx(doc, line);
   if (!route) return null;
   const basisIn = report?.measuredLengthIn ?? null;
@@ -70,13 +74,13 @@ export function LineShape({ doc, line, report, pxPerIn, fluid, selected, hidden 
         lineJoin="round"
         lineCap="round"
         dash={line.hosePartId ? undefined : [10 / zoom, 6 / zoom]}
-        onClick={onSelect}
+        onClick={(e) => onSelect(line.id, e)}
        
         onDblClick={(e) => {
           e.cancelBubble = true;
           const stage = e.target.getStage();
           const pointer = stage?.getRelativePointerPosition();
-          if (pointer) onDoubleClick(pointer);
+          if (pointer) onDoubleClick(line.id, pointer);
         }}
       />
       {geometry &&
@@ -92,4 +96,4 @@ export function LineShape({ doc, line, report, pxPerIn, fluid, selected, hidden 
       {label && <DimensionLabel x={labelPosition(route).x + 6 / zoom} y={labelPosition(route).y + 6 / zoom} text={label} style={fluid} zoom={zoom} />}
     </Group>
   );
-}
+});

@@ -1,5 +1,6 @@
 import type { CircuitUnit } from '@linesmith/routing';
 import type { KonvaEventObject } from 'konva/lib/Node';
+import { memo } from 'react';
 import { Group, Rect, Text } from 'react-konva';
 import { unitSize } from '../../model/unit-presets';
 import { pinnedDrag } from './pinned-drag';
@@ -14,9 +15,9 @@ export interface UnitShapeProps {
   /** Left out of the drawing while a drag preview draws it elsewhere. */
   hidden?: boolean;
   zoom: number;
-  onSelect(event: KonvaEventObject<MouseEvent>): void;
-  onSelectPort(portId: string, event: KonvaEventObject<MouseEvent>): void;
-  onDragStart(): void;
+  onSelect(unitId: string, event: KonvaEventObject<MouseEvent>): void;
+  onSelectPort(unitId: string, portId: string, event: KonvaEventObject<MouseEvent>): void;
+  onDragStart(unitId: string): void;
   /** The pointer's travel since the drag started, in sketch pixels (the unit itself stays put). */
   onDragMove(dx: number, dy: number): void;
   onDragEnd(): void;
@@ -25,7 +26,7 @@ export interface UnitShapeProps {
 const mountFill: Record<CircuitUnit['mountGroup'], string> = { powertrain: '#e0e7ff', chassis: '#f3f4f6', axle: '#ecfccb' };
 
 /** A unit: a box turned with the unit, its name and mount group, and its ports on the edges. */
-export function UnitShape(props: UnitShapeProps) {
+export const UnitShape = memo(function UnitShape(props: UnitShapeProps) {
   const { unit, selected, zoom } = props;
   const { width, height } = unitSize(unit.kind);
   return (
@@ -35,7 +36,7 @@ export function UnitShape(props: UnitShapeProps) {
       rotation={unit.rotation}
       visible={!props.hidden}
       draggable={props.draggable}
-      {...pinnedDrag(props)}
+      {...pinnedDrag({ onDragStart: () => props.onDragStart(unit.id), onDragMove: props.onDragMove, onDragEnd: props.onDragEnd })}
       name="unit"
     >
       <Rect
@@ -48,7 +49,7 @@ export function UnitShape(props: UnitShapeProps) {
         stroke={selected ? '#2563eb' : '#374151'}
         strokeWidth={(selected ? 3 : 1.5) / zoom}
         dash={unit.mountGroup === 'chassis' ? undefined : [8 / zoom, 4 / zoom]}
-        onClick={props.onSelect}
+        onClick={(e) => props.onSelect(unit.id, e)}
        
       />
       <Text
@@ -68,9 +69,9 @@ export function UnitShape(props: UnitShapeProps) {
           zoom={zoom}
           selected={props.selectedPortId === port.id}
           connected={props.connectedPorts.has(`${unit.id}/${port.id}`)}
-          onSelect={(e) => props.onSelectPort(port.id, e)}
+          onSelect={(e) => props.onSelectPort(unit.id, port.id, e)}
         />
       ))}
     </Group>
   );
-}
+});

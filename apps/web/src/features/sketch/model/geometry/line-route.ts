@@ -7,12 +7,16 @@ import {
   routePath,
   type CircuitDocument,
   type CircuitLine,
+  type CircuitUnit,
   type RoutePath,
 } from '@linesmith/routing';
 import type { Point } from '../tools';
 
+/** What a route needs of the document: its units (a line's shape passes just its two). */
+export type UnitsOf = Pick<CircuitDocument, 'units'>;
+
 /** The line's route in sketch pixels: from-port, corners, to-port; null when a port is missing. */
-export function routePx(doc: CircuitDocument, line: CircuitLine): Point[] | null {
+export function routePx(doc: UnitsOf, line: CircuitLine): Point[] | null {
   const end = (ref: CircuitLine['from']) => {
     const unit = doc.units.find((u) => u.id === ref.unitId);
     const port = unit?.ports.find((p) => p.id === ref.portId);
@@ -23,6 +27,14 @@ export function routePx(doc: CircuitDocument, line: CircuitLine): Point[] | null
   if (!a || !b) return null;
   return [a, ...line.points.map((p) => ({ x: p.x, y: p.y })), b];
 }
+
+/** The units at a line's two ends, looked up by id (what LineShape draws the line between). */
+export function lineEnds(unitsById: ReadonlyMap<string, CircuitUnit>, line: CircuitLine): { from: CircuitUnit | undefined; to: CircuitUnit | undefined } {
+  return { from: unitsById.get(line.from.unitId), to: unitsById.get(line.to.unitId) };
+}
+
+/** Units by id, for lineEnds. */
+export const unitsById = (doc: UnitsOf): ReadonlyMap<string, CircuitUnit> => new Map(doc.units.map((u) => [u.id, u]));
 
 /** Index of the route segment nearest to `p` (segment i runs from route point i to i + 1). */
 export function nearestSegment(route: readonly Point[], p: Point): { index: number; distance: number } {
@@ -43,7 +55,7 @@ export interface LinePathIn {
   stretch: number;
 }
 
-export function linePathIn(doc: CircuitDocument, line: CircuitLine, pxPerIn: number, basisIn: number | null): LinePathIn | null {
+export function linePathIn(doc: UnitsOf, line: CircuitLine, pxPerIn: number, basisIn: number | null): LinePathIn | null {
   const route = routePx(doc, line);
   if (!route || !(pxPerIn > 0)) return null;
   const detail = centrelineDetail(
