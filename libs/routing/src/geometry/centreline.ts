@@ -56,16 +56,16 @@ export function centrelineDetail(pointsIn: readonly Vec[], bendRadiiIn: readonly
     radii.push(r);
   }
   const n = points.length;
-  const legsIn: number[] = [];
+  const legsIn = new Array<number>(Math.max(0, n - 1)).fill(0);
   let sharpIn = 0;
   for (let i = 0; i < n - 1; i++) {
     const dx = points[i + 1].x - points[i].x;
     const dy = points[i + 1].y - points[i].y;
     const leg = Math.sqrt(dx * dx + dy * dy);
-    legsIn.push(leg);
+    legsIn[i] = leg;
     sharpIn += leg;
   }
-  const bends: Bend[] = [];
+  const bends: Bend[] = new Array<Bend>(Math.max(0, n - 2)); // sized once: one per inner corner
   // Plain arrays, not Float64Array: creating a typed array costs more than these few numbers.
   const tangentAt: number[] = [0];
   let fits = true;
@@ -89,7 +89,7 @@ export function centrelineDetail(pointsIn: readonly Vec[], bendRadiiIn: readonly
     }
     tangentAt.push(tangent);
     bendSavingIn += 2 * tangent - arc;
-    bends.push({ pointIndex: pointIndices[i], deflectionRad: theta, radiusIn: radius, tangentIn: tangent, arcIn: arc });
+    bends[i - 1] = { pointIndex: pointIndices[i], deflectionRad: theta, radiusIn: radius, tangentIn: tangent, arcIn: arc };
   }
   tangentAt.push(0);
   const overlappingLegs: number[] = [];

@@ -22,15 +22,25 @@ const piecesOf = (deflectionRad: number) => Math.max(1, Math.ceil(deflectionRad 
 
 /** Builds the path of a centreline. A route whose bends do not fit is walked through its sharp corners. */
 export function routePath(detail: CentrelineDetail): RoutePath {
+  const path = fillRoutePath(detail, { xs: [], ys: [], s: [], count: 0, lengthIn: 0 });
+  path.xs.length = path.count;
+  path.ys.length = path.count;
+  path.s.length = path.count;
+  return path;
+}
+
+/**
+ * routePath written into `path`, whose arrays are reused: only the first `count` entries are this
+ * route's. The evaluation works each line's path out in one scratch path it does not keep.
+ */
+export function fillRoutePath(detail: CentrelineDetail, path: RoutePath): RoutePath {
   const { points: corners, bends, fits } = detail;
-  // Plain arrays sized once, and the steps written out: typed arrays cost more to create than
-  // these few dozen numbers, and helper calls that V8 does not inline box every coordinate.
-  let capacity = corners.length + 1;
-  if (fits) for (const bend of bends) capacity += piecesOf(bend.deflectionRad) + 1;
-  const xs = new Array<number>(capacity);
-  const ys = new Array<number>(capacity);
-  const s = new Array<number>(capacity);
-  if (corners.length === 0) return { xs: [], ys: [], s: [], count: 0, lengthIn: 0 };
+  // Plain arrays, and the steps written out: typed arrays cost more to create than these few
+  // dozen numbers, and helper calls that V8 does not inline box every coordinate.
+  const { xs, ys, s } = path;
+  path.count = 0;
+  path.lengthIn = 0;
+  if (corners.length === 0) return path;
   xs[0] = corners[0].x;
   ys[0] = corners[0].y;
   s[0] = 0;
@@ -72,10 +82,9 @@ export function routePath(detail: CentrelineDetail): RoutePath {
       count++;
     }
   }
-  xs.length = count;
-  ys.length = count;
-  s.length = count;
-  return { xs, ys, s, count, lengthIn: s[count - 1] };
+  path.count = count;
+  path.lengthIn = s[count - 1];
+  return path;
 }
 
 /** Point at distance `at` along the path (clamped to its ends). */

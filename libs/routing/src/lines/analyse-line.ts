@@ -3,7 +3,7 @@ import { fitsOd } from '@linesmith/catalog';
 import type { CircuitLine } from '../circuit/document.schema.js';
 import { centrelineDetail, type CentrelineDetail } from '../geometry/centreline.js';
 import { subtractIntervals, totalLength, type Interval } from '../geometry/intervals.js';
-import { routePath } from '../geometry/route-path.js';
+import { fillRoutePath, type RoutePath } from '../geometry/route-path.js';
 import { pointIn, pointPxToIn, type PointIn } from '../geometry/units.js';
 import { distance } from '../geometry/vec.js';
 import type { ShopRules } from '../rules/shop-rules.js';
@@ -42,6 +42,9 @@ export interface LineEnvironment {
 
 /** Relative length difference below which the path and the drawn basis count as the same length. */
 const STRETCH_NOISE = 1e-12;
+
+/** Each line's route path, overwritten by the next line: only the heat check and the stretch read it. */
+const SCRATCH_PATH: RoutePath = { xs: [], ys: [], s: [], count: 0, lengthIn: 0 };
 
 export const portKey = (unitId: string, portId: string): string => `${unitId}/${portId}`;
 
@@ -101,7 +104,7 @@ export function analyseLine(line: CircuitLine, env: LineEnvironment): LineAnalys
   }
 
   // Positions along the line are in the basis length; a measured line stretches the drawn one evenly.
-  const path = centreline ? routePath(centreline) : null;
+  const path = centreline ? fillRoutePath(centreline, SCRATCH_PATH) : null;
   const rawHeat = path ? heatExposure(path, env.zones, rules.sleeveOverlapIn) : null;
   const stretch = path && basisIn !== null && path.lengthIn > 0 ? basisIn / path.lengthIn : 1;
   // A drawn basis equals the path length up to rounding: only a real stretch is worth new intervals.

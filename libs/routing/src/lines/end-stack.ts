@@ -7,8 +7,9 @@ export type Mater = (a: ConnectionSpec, b: ConnectionSpec) => MateResult;
 
 /** mate() remembers its answers for one evaluation: a circuit repeats the same few connections. */
 export function cachedMate(): Mater {
-  // Keyed by the connection objects themselves (ports and parts are shared), then by value.
-  const byObject = new WeakMap<ConnectionSpec, WeakMap<ConnectionSpec, MateResult>>();
+  // Keyed by the connection objects themselves (ports and parts are shared), then by value. Plain
+  // Maps, not WeakMaps: the cache lives for one evaluation, and weak tables cost the GC extra.
+  const byObject = new Map<ConnectionSpec, Map<ConnectionSpec, MateResult>>();
   const byValue = new Map<string, MateResult>();
   const key = (c: ConnectionSpec) => `${c.family}|${c.size}|${c.gender}`;
   return (a, b) => {
@@ -21,7 +22,7 @@ export function cachedMate(): Mater {
       result = mate(a, b);
       byValue.set(k, result);
     }
-    if (!row) byObject.set(a, (row = new WeakMap()));
+    if (!row) byObject.set(a, (row = new Map()));
     row.set(b, result);
     return result;
   };

@@ -35,7 +35,8 @@ const TARGET_KIND_ORDER: Readonly<Record<FlagTarget['kind'], number>> = {
 };
 
 const text = (a: string | undefined, b: string | undefined) => {
-  const [x, y] = [a ?? '', b ?? ''];
+  const x = a ?? '';
+  const y = b ?? '';
   return x < y ? -1 : x > y ? 1 : 0; // code-unit order: the same on every machine and locale
 };
 const num = (a: number | undefined, b: number | undefined) => (a ?? -1) - (b ?? -1);
