@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { defaultShopRules } from '../rules/shop-rules.js';
 import { cutLength, cutLengthTolerance, requiredSlack, roundCutUp } from './cut-length.js';
+import { SKETCH_LIMITS } from '../circuit/document.schema.js';
 import { proposeSupports, unsupportedSpans } from './supports.js';
 
 describe('cut length', () => {
@@ -61,9 +62,11 @@ describe('supports', () => {
   it('proposes the fewest evenly spaced supports within the spacing (18 in, common practice)', () => {
     expect(proposeSupports(40, 18)).toEqual([40 / 3, 80 / 3]);
     expect(proposeSupports(36, 18)).toEqual([18]);
+    // Product bound: never more proposals than a line can hold, however long the line.
+    expect(proposeSupports(5e8, 18)).toHaveLength(SKETCH_LIMITS.supportsPerLine);
     expect(proposeSupports(12, 18)).toEqual([]);
     fc.assert(
-      fc.property(fc.double({ min: 1, max: 500, noNaN: true }), fc.double({ min: 2, max: 40, noNaN: true }), (length, spacing) => {
+      fc.property(fc.double({ min: 1, max: 400, noNaN: true }), fc.double({ min: 2, max: 40, noNaN: true }), (length, spacing) => {
         const spans = unsupportedSpans(length, proposeSupports(length, spacing));
         expect(Math.max(...spans.map((s) => s.lengthIn))).toBeLessThanOrEqual(spacing + 1e-9);
         expect(spans.length).toBe(Math.max(1, Math.ceil(length / spacing - 1e-9)));

@@ -1,3 +1,4 @@
+import { SKETCH_LIMITS } from '../circuit/document.schema.js';
 import type { Interval } from '../geometry/intervals.js';
 
 export interface Span extends Interval {
@@ -20,10 +21,13 @@ export function unsupportedSpans(lengthIn: number, supportsAtIn: readonly number
   return spans;
 }
 
-/** Fewest evenly spaced supports that leave no span longer than `spacingIn`. */
+/**
+ * Fewest evenly spaced supports that leave no span longer than `spacingIn`; never more than a line
+ * can hold (`SKETCH_LIMITS.supportsPerLine`), so an absurd length cannot flood the answer.
+ */
 export function proposeSupports(lengthIn: number, spacingIn: number): number[] {
   if (!(lengthIn > 0) || !(spacingIn > 0)) return [];
-  const spans = Math.ceil(lengthIn / spacingIn - 1e-9);
+  const spans = Math.min(Math.ceil(lengthIn / spacingIn - 1e-9), SKETCH_LIMITS.supportsPerLine + 1);
   const at: number[] = [];
   for (let i = 1; i < spans; i++) at.push((i * lengthIn) / spans);
   return at;

@@ -14,7 +14,9 @@ export const supportGapRule: Rule = {
     for (const line of ctx.lines) {
       const long = line.report.supports.spans.filter((s) => s.lengthIn > spacing + 1e-9);
       if (long.length === 0) continue;
-      const proposed = line.report.supports.proposedAtIn.map((at) => formatInches(at)).join(', ');
+      const all = line.report.supports.proposedAtIn;
+      const shown = all.slice(0, 6).map((at) => formatInches(at));
+      const proposed = all.length > shown.length ? `${shown.join(', ')} … (${all.length} in all)` : shown.join(', ');
       flags.push({
         code: 'support-gap',
         severity: 'caution',
