@@ -1,6 +1,6 @@
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { apiSignIn, runTag, submittedCircuit, type ApiSession, type CircuitRef } from './api-setup';
+import { api, apiSignIn, runTag, submittedCircuit, type ApiSession, type CircuitRef } from './api-setup';
 import { baseUrl, demoUsers, openBrowser, screenshot, signIn } from './browser';
 
 // The reviewer's part of the journey (PRODUCT.md roles): two circuits a fabricator submitted by
@@ -41,6 +41,13 @@ describe('reviewer: acknowledge and approve, or return with comments', () => {
     const approve = lead.getByRole('button', { name: /^Approve revision/ });
     // Unacknowledged cautions hold the approval back.
     expect(await approve.isDisabled()).toBe(true);
+
+    // Every caution of the server's check is on screen, also those one acknowledgement covers together.
+    const review = await api<{ evaluation: { flags: Array<{ severity: string; message: string }> } }>(reviewer, 'GET', `/circuits/${toApprove.id}/review`);
+    const cautionMessages = review.evaluation.flags.filter((f) => f.severity === 'caution').map((f) => f.message);
+    expect(cautionMessages.length).toBeGreaterThan(0);
+    const cautionList = lead.getByRole('list', { name: 'Cautions' });
+    for (const message of cautionMessages) await cautionList.getByText(message, { exact: true }).waitFor();
 
     const forms = lead.getByRole('form', { name: /^Acknowledge / });
     expect(await forms.count()).toBeGreaterThan(0);

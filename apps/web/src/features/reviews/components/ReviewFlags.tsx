@@ -76,10 +76,13 @@ export function ReviewFlags({ circuitId, document, readiness, canAcknowledge }: 
           <Text>No cautions.</Text>
         ) : (
           <ul className={styles.list} aria-label="Cautions">
-            {cautions.map(({ key, flag, acknowledgement }) => (
+            {cautions.map(({ key, flag, alsoFlags, acknowledgement }) => (
               <li key={key}>
                 <Card className={styles.card}>
                   <FlagText document={document} flag={flag} />
+                  {alsoFlags.map((also, i) => (
+                    <Text key={i}>{also.message}</Text>
+                  ))}
                   {acknowledgement ? (
                     <div className={styles.ack}>
                       <SeverityLabel level="ok" text={`Acknowledged by ${personName(acknowledgement.by)}, ${formatDateTime(acknowledgement.at)}`} />

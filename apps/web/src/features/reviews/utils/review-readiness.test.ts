@@ -29,6 +29,23 @@ describe('reviewReadiness (DOMAIN §5: blockers must be fixed, cautions acknowle
     expect(state.canApprove).toBe(false);
   });
 
+  it('keeps every flag one acknowledgement covers: two narrow fittings on one line share a key and both stay listed', () => {
+    const narrow = (message: string) => ({
+      code: 'restriction',
+      severity: 'caution' as const,
+      message,
+      target: { kind: 'line' as const, id: 'line-1', lineId: 'line-1' },
+      fix: 'Choose a full-flow fitting.',
+    });
+    const state = reviewReadiness([narrow('Hose end bore 0.285 in'), narrow('Adapter bore 0.3 in')], []);
+    expect(state.cautions).toHaveLength(1);
+    expect(state.openCautions).toBe(1);
+    expect([state.cautions[0].flag, ...state.cautions[0].alsoFlags].map((f) => f.message)).toEqual([
+      'Hose end bore 0.285 in',
+      'Adapter bore 0.3 in',
+    ]);
+  });
+
   it('ignores an acknowledgement of a different item with the same code', () => {
     const state = reviewReadiness([supportGapCaution], [{ flagKey: 'support-gap@line:line-2', note: 'other line', by, at }]);
     expect(state.canApprove).toBe(false);

@@ -4,6 +4,8 @@ import type { Acknowledgement } from '../api/review-schemas';
 export interface CautionState {
   key: string;
   flag: Flag;
+  /** Further flags of the same key (e.g. two narrow fittings on one line): the one acknowledgement covers them too, so the reviewer must see them. */
+  alsoFlags: Flag[];
   acknowledgement: Acknowledgement | null;
 }
 
@@ -21,15 +23,16 @@ export function reviewReadiness(flags: readonly Flag[], acknowledgements: readon
   const byKey = new Map(acknowledgements.map((a) => [a.flagKey, a]));
   const blockers = flags.filter((f) => f.severity === 'blocker');
   const notes = flags.filter((f) => f.severity === 'note');
-  const seen = new Set<string>();
-  const cautions: CautionState[] = [];
+  const byFlagKey = new Map<string, CautionState>();
   for (const flag of flags) {
     if (flag.severity !== 'caution') continue;
     const key = flagKey(flag);
-    if (seen.has(key)) continue; // one acknowledgement answers every flag of the same key
-    seen.add(key);
-    cautions.push({ key, flag, acknowledgement: byKey.get(key) ?? null });
+    const same = byFlagKey.get(key);
+    // One acknowledgement answers every flag of the same key.
+    if (same) same.alsoFlags.push(flag);
+    else byFlagKey.set(key, { key, flag, alsoFlags: [], acknowledgement: byKey.get(key) ?? null });
   }
+  const cautions = [...byFlagKey.values()];
   const openCautions = cautions.filter((c) => c.acknowledgement === null).length;
   return { blockers, cautions, notes, openCautions, canApprove: blockers.length === 0 && openCautions === 0 };
 }
