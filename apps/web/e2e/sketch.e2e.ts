@@ -117,6 +117,17 @@ describe('fabricator: sketching a transmission-cooler circuit', () => {
     const drawnPx = path.slice(1).reduce((sum, p, i) => sum + Math.hypot(p.x - path[i].x, p.y - path[i].y), 0);
     expect(report.drawnLengthIn).toBeCloseTo(drawnPx / pxPerIn, 6);
     expect(report.drawnLengthIn).toBeCloseTo(24.8, 1);
+    // Centreline, by hand: a bend of radius r turning through θ replaces two tangent lengths r·tan(θ/2) by an
+    // arc r·θ (circle geometry), so each corner shortens the path by 2r·tan(θ/2) − r·θ.
+    const shortening = line.points.reduce((sum, corner, i) => {
+      const [before, after] = [path[i], path[i + 2]];
+      const u = { x: corner.x - before.x, y: corner.y - before.y };
+      const v = { x: after.x - corner.x, y: after.y - corner.y };
+      const theta = Math.acos((u.x * v.x + u.y * v.y) / (Math.hypot(u.x, u.y) * Math.hypot(v.x, v.y)));
+      return sum + 2 * corner.bendRadiusIn * Math.tan(theta / 2) - corner.bendRadiusIn * theta;
+    }, 0);
+    expect(line.points.every((p) => p.bendRadiusIn > 0)).toBe(true);
+    expect(report.centrelineIn).toBeCloseTo(report.drawnLengthIn - shortening, 6);
     // Cut long, never short: rounded up to the next 1/8 in (common practice; the shop's cut rounding).
     expect(report.cutLengthIn! * 8).toBeCloseTo(Math.round(report.cutLengthIn! * 8), 9);
     expect(report.cutLengthIn!).toBeGreaterThanOrEqual(report.exactCutIn!);
