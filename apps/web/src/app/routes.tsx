@@ -147,6 +147,13 @@ export const appRoutes: RouteObject[] = [
                           import('../features/users/components/UsersPage').then((m) => ({ Component: m.UsersPage })),
                       },
                       {
+                        path: 'shop-profile',
+                        lazy: () =>
+                          import('../features/shop-profile/components/ShopProfilePage').then((m) => ({
+                            Component: m.ShopProfilePage,
+                          })),
+                      },
+                      {
                         path: 'shop-rules',
                         lazy: () =>
                           import('../features/shop-rules/components/ShopRulesPage').then((m) => ({

@@ -221,6 +221,34 @@ describe('api client', () => {
     });
   });
 
+  it('reads the file name the server gave a download', async () => {
+    const mock = createFetchMock().on(
+      'GET',
+      '/api/orders/o-1/export.xlsx',
+      () => new Response('xlsx', { status: 200, headers: { 'Content-Disposition': 'attachment; filename="order-sheet.xlsx"' } }),
+    );
+    const client = await signedInClient(mock);
+
+    const file = await client.requestFile('/api/orders/o-1/export.xlsx');
+
+    expect(file.fileName).toBe('order-sheet.xlsx');
+    expect(await file.blob.text()).toBe('xlsx');
+  });
+
+  it('reloads the signed-in user (a renamed shop) into the session and tells the listeners', async () => {
+    const renamed = { ...user, shop: { ...user.shop, name: 'Renamed Demo Shop' } };
+    const mock = createFetchMock().on('GET', '/api/me', () => jsonResponse(200, renamed));
+    const client = await signedInClient(mock);
+    let notified = 0;
+    client.subscribe(() => (notified += 1));
+
+    await client.reloadMe();
+
+    const session = client.getSession();
+    expect(session.status === 'signed-in' && session.user.shop.name).toBe('Renamed Demo Shop');
+    expect(notified).toBe(1);
+  });
+
   it('lends the Authorization header to a custom request and retries it once after a refresh', async () => {
     const mock = createFetchMock().on('POST', '/api/auth/refresh', () => jsonResponse(200, sessionBody(user, 'token-2')));
     const client = await signedInClient(mock);

@@ -1,7 +1,8 @@
 import type { z } from 'zod';
 import { ApiError, apiErrorFromText } from './api-error';
+import { fileNameFromContentDisposition } from './content-disposition';
 import { authSessionSchema } from './contract/auth-session-schema';
-import type { Me } from './contract/me-schema';
+import { meSchema, type Me } from './contract/me-schema';
 
 export type SignedOutReason = 'not-signed-in' | 'expired' | 'signed-out';
 
@@ -28,6 +29,12 @@ export interface BlobRequestOptions {
   headers?: Record<string, string>;
 }
 
+/** A downloaded file: its bytes and the name the server gave it (`Content-Disposition`), if any. */
+export interface DownloadedFile {
+  blob: Blob;
+  fileName: string | null;
+}
+
 /** Anything with an HTTP status: a fetch Response, or what an XMLHttpRequest answered. */
 export interface StatusResult {
   status: number;
@@ -42,6 +49,8 @@ export interface ApiClient {
   request<T>(path: string, options: RequestOptions<T>): Promise<T>;
   /** GETs bytes (a photo, a spreadsheet) with the session's token; non-2xx throws an ApiError. */
   requestBlob(path: string, options?: BlobRequestOptions): Promise<Blob>;
+  /** Like `requestBlob`, also reading the file name the server sent (an order sheet export). */
+  requestFile(path: string, options?: BlobRequestOptions): Promise<DownloadedFile>;
   /**
    * For requests the helpers above cannot make (e.g. a multipart upload through XMLHttpRequest for
    * its progress events): runs `attempt` with the Authorization header, and once more with a
@@ -52,6 +61,8 @@ export interface ApiClient {
   /** Posts to an endpoint that answers like login (accepting an invitation) and adopts that session. */
   signInWith(path: string, body: unknown): Promise<Me>;
   signOut(): Promise<void>;
+  /** Reads `GET /api/me` again into the session (after a rename of the user or the shop). */
+  reloadMe(): Promise<Me>;
   /** Restores the session from the refresh cookie once per page load. */
   restoreSession(): Promise<boolean>;
   getSession(): SessionState;
@@ -174,10 +185,14 @@ export function createApiClient({ fetchFn, baseUrl = '' }: ApiClientOptions = {}
     return parseBody(response, schema);
   }
 
-  async function requestBlob(path: string, { signal, headers }: BlobRequestOptions = {}): Promise<Blob> {
+  async function requestFile(path: string, { signal, headers }: BlobRequestOptions = {}): Promise<DownloadedFile> {
     const response = await withToken((token) => send(path, 'GET', undefined, token, signal, { Accept: '*/*', ...headers }));
     if (!response.ok) throw await toApiError(response);
-    return response.blob();
+    return { blob: await response.blob(), fileName: fileNameFromContentDisposition(response.headers.get('Content-Disposition')) };
+  }
+
+  async function requestBlob(path: string, options?: BlobRequestOptions): Promise<Blob> {
+    return (await requestFile(path, options)).blob;
   }
 
   function withAuthorization<R extends StatusResult>(attempt: (headers: Record<string, string>) => Promise<R>): Promise<R> {
@@ -205,6 +220,13 @@ export function createApiClient({ fetchFn, baseUrl = '' }: ApiClientOptions = {}
     setSession({ status: 'signed-out', reason: 'signed-out' });
   }
 
+  async function reloadMe(): Promise<Me> {
+    const me = await request('/api/me', { schema: meSchema });
+    // Only the same user's session takes the new profile; a sign-out meanwhile stays signed out.
+    if (session.status === 'signed-in' && session.user.id === me.id) setSession({ ...session, user: me });
+    return me;
+  }
+
   function restoreSession(): Promise<boolean> {
     restoreOnce ??= refreshSession().then((ok) => {
       if (!ok) setSession({ status: 'signed-out', reason: 'not-signed-in' });
@@ -216,10 +238,12 @@ export function createApiClient({ fetchFn, baseUrl = '' }: ApiClientOptions = {}
   return {
     request,
     requestBlob,
+    requestFile,
     withAuthorization,
     signIn,
     signInWith,
     signOut,
+    reloadMe,
     restoreSession,
     getSession: () => session,
     subscribe(listener) {

@@ -1,7 +1,6 @@
 import type { z } from 'zod';
 import type { ApiClient } from '../../../lib/api-client';
-import { ApiError } from '../../../lib/api-error';
-import { apiErrorFrom, bearerToken, renewToken } from '../../builds/api/authorized-request';
+import { ApiError, apiErrorFromText } from '../../../lib/api-error';
 
 export interface PostMultipartOptions<T> {
   client: ApiClient;
@@ -19,11 +18,16 @@ interface RawResult {
 }
 
 /** XMLHttpRequest rather than fetch: only XHR reports upload progress in every browser. */
-function send(path: string, fields: Record<string, string | Blob>, token: string | null, onProgress?: (f: number) => void) {
+function send(
+  path: string,
+  fields: Record<string, string | Blob>,
+  headers: Record<string, string>,
+  onProgress?: (f: number) => void,
+) {
   return new Promise<RawResult>((resolve, reject) => {
     const xhr = new XMLHttpRequest();
     xhr.open('POST', path);
-    if (token) xhr.setRequestHeader('Authorization', `Bearer ${token}`);
+    for (const [name, value] of Object.entries(headers)) xhr.setRequestHeader(name, value);
     xhr.setRequestHeader('Accept', 'application/json');
     xhr.upload.onprogress = (event) => {
       if (event.lengthComputable && event.total > 0) onProgress?.(event.loaded / event.total);
@@ -40,14 +44,15 @@ function send(path: string, fields: Record<string, string | Blob>, token: string
   });
 }
 
-/** A multipart POST with the session's bearer token (one renewal on a 401), parsed with `schema`. */
+/** A multipart POST with the session's authorization (the client refreshes it once on a 401), parsed with `schema`. */
 export async function postMultipart<T>({ client, path, fields, schema, onProgress, fallbackMessage }: PostMultipartOptions<T>): Promise<T> {
-  let result = await send(path, fields, bearerToken(client), onProgress);
-  if (result.status === 401 && (await renewToken(client))) {
-    onProgress?.(0);
-    result = await send(path, fields, bearerToken(client), onProgress);
-  }
-  if (result.status < 200 || result.status >= 300) throw apiErrorFrom(result.status, result.text, fallbackMessage);
+  let attempts = 0;
+  const result = await client.withAuthorization((headers) => {
+    // A retry after a refreshed session starts the bar again.
+    if (attempts++ > 0) onProgress?.(0);
+    return send(path, fields, headers, onProgress);
+  });
+  if (result.status < 200 || result.status >= 300) throw apiErrorFromText(result.status, result.text, fallbackMessage);
   let raw: unknown;
   try {
     raw = result.text ? JSON.parse(result.text) : undefined;
