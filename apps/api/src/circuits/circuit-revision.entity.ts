@@ -61,4 +61,11 @@ export class CircuitRevisionEntity {
 
   @Column({ name: 'approved_at', type: 'timestamptz', nullable: true })
   approvedAt: Date | null;
+
+  /**
+   * The rules check signed off with the revision (written with `locked_at`, then locked): its cut
+   * lengths and bill of materials are what the shop builds and orders from. NULL before sign-off.
+   */
+  @Column({ type: 'jsonb', nullable: true, select: false })
+  evaluation: unknown;
 }

@@ -1,5 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
+import type { CircuitEvaluation } from '@linesmith/routing';
 import type { DataSource, EntityManager, Repository } from 'typeorm';
 import { NotFoundError } from '../common/errors/app-error.js';
 import { UserEntity } from '../users/user.entity.js';
@@ -37,6 +38,26 @@ export class CircuitRevisionsService {
       .getOne();
     if (!revision) throw new NotFoundError('The revision');
     return toRevisionDto(revision);
+  }
+
+  /**
+   * The rules check stored when revision `number` was signed off, or null: not signed off, or signed
+   * off before sign-offs stored their check (those are checked live, as before).
+   */
+  async signedOffEvaluation(shopId: string, circuitId: string, number: number): Promise<CircuitEvaluation | null> {
+    const revision = await this.revisions
+      .createQueryBuilder('revision')
+      .select(['revision.id', 'revision.lockedAt'])
+      .addSelect('revision.evaluation')
+      .where('revision.shop_id = :shopId AND revision.circuit_id = :circuitId AND revision.number = :number', {
+        shopId,
+        circuitId,
+        number,
+      })
+      .getOne();
+    if (!revision) throw new NotFoundError('The revision');
+    // Written by the engine at sign-off and locked by a trigger since: trusted as the engine's output.
+    return revision.lockedAt && revision.evaluation ? (revision.evaluation as CircuitEvaluation) : null;
   }
 
   /**

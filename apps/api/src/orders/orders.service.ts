@@ -71,8 +71,10 @@ export class OrdersService {
     for (const circuit of circuits) {
       const approved = approvedRevisionNumber(await this.revisions.list(shopId, circuit.id));
       if (approved === undefined) throw new ConflictError(`“${circuit.name}” has no signed-off revision to order from.`);
-      const { document } = await this.revisions.get(shopId, circuit.id, approved);
-      bomRows.push(...(await this.rules.evaluate(shopId, document)).bom.rows);
+      // The bill of materials the reviewer signed off, not one re-checked with today's rules and catalogue.
+      const stored = await this.revisions.signedOffEvaluation(shopId, circuit.id, approved);
+      const evaluation = stored ?? (await this.rules.evaluate(shopId, (await this.revisions.get(shopId, circuit.id, approved)).document));
+      bomRows.push(...evaluation.bom.rows);
     }
     const [parts, shop] = await Promise.all([this.catalogue.partsOf(shopId), this.shops.getOwnShop(shopId)]);
     const stockByPart = new Map(parts.map((part) => [part.id, part.stockOnHand]));

@@ -189,7 +189,7 @@ export class ReviewsService {
 
   /**
    * Signs the revision off: refused while a fresh check finds a blocker or an unacknowledged
-   * caution, and to the user who submitted it. Locks the revision for good.
+   * caution, and to the user who submitted it. Locks the revision for good, with that check stored on it.
    */
   async approve(caller: AuthUser, circuitId: string, note: string): Promise<ReviewDto> {
     const { shopId, userId } = caller;
@@ -207,7 +207,8 @@ export class ReviewsService {
       const locked = await tx
         .createQueryBuilder()
         .update(CircuitRevisionEntity)
-        .set({ lockedAt: () => 'clock_timestamp()', approvedAt: () => 'clock_timestamp()', approvedById: userId })
+        // The check just passed is stored with the lock: exports and orders use these numbers from now on.
+        .set({ lockedAt: () => 'clock_timestamp()', approvedAt: () => 'clock_timestamp()', approvedById: userId, evaluation })
         .where('id = :id AND locked_at IS NULL', { id: review.revisionId })
         .execute();
       if (!locked.affected) throw new ConflictError('This revision is already locked by an earlier sign-off.');

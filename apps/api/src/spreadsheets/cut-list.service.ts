@@ -36,8 +36,10 @@ export class CutListService {
    */
   async export(shopId: string, circuitId: string, choice: CutListChoice): Promise<CutListFile> {
     const circuit = await this.circuits.getOwn(shopId, circuitId);
-    const { document, basis, suffix } = await this.documentOf(shopId, circuitId, choice);
-    const [evaluation, catalogue] = await Promise.all([this.rules.evaluate(shopId, document), this.catalogue.partsOf(shopId)]);
+    const { document, basis, suffix, revisionNumber } = await this.documentOf(shopId, circuitId, choice);
+    // A signed-off revision keeps the numbers its reviewer approved; drafts and open revisions are checked now.
+    const stored = revisionNumber === undefined ? null : await this.revisions.signedOffEvaluation(shopId, circuitId, revisionNumber);
+    const [evaluation, catalogue] = await Promise.all([stored ?? this.rules.evaluate(shopId, document), this.catalogue.partsOf(shopId)]);
     const workbook = cutListWorkbook({
       title: `${circuit.name}: cut list and parts`,
       basis,
@@ -52,10 +54,10 @@ export class CutListService {
     shopId: string,
     circuitId: string,
     choice: CutListChoice,
-  ): Promise<{ document: CircuitDocument; basis: string; suffix: string }> {
+  ): Promise<{ document: CircuitDocument; basis: string; suffix: string; revisionNumber?: number }> {
     if (choice.revision !== undefined) {
       const revision = await this.revisions.get(shopId, circuitId, choice.revision);
-      return { document: revision.document, basis: `Revision ${revision.number}`, suffix: `rev${revision.number}` };
+      return { document: revision.document, basis: `Revision ${revision.number}`, suffix: `rev${revision.number}`, revisionNumber: revision.number };
     }
     if (choice.draft) {
       const draft = await this.drafts.get(shopId, circuitId);
@@ -66,6 +68,11 @@ export class CutListService {
       throw new ConflictError('This circuit has no approved revision yet. Export the draft instead, or a numbered revision.');
     }
     const revision = await this.revisions.get(shopId, circuitId, approved);
-    return { document: revision.document, basis: `Approved revision ${revision.number}`, suffix: `rev${revision.number}` };
+    return {
+      document: revision.document,
+      basis: `Approved revision ${revision.number}`,
+      suffix: `rev${revision.number}`,
+      revisionNumber: revision.number,
+    };
   }
 }

@@ -4,6 +4,7 @@ import { CreateShopRules1796185848071 } from './1796185848071-create-shop-rules.
 import { CreateBuildsCircuitsUploads1796185917823 } from './1796185917823-create-builds-circuits-uploads.js';
 import { CreateOutboxTokensStockOrders1796186373635 } from './1796186373635-create-outbox-tokens-stock-orders.js';
 import { CreateReviewsAuditNotifications1796186679267 } from './1796186679267-create-reviews-audit-notifications.js';
+import { StoreApprovedEvaluation1796300000000 } from './1796300000000-store-approved-evaluation.js';
 
 /** Every migration in order of its timestamp; add new ones at the end. */
 export const MIGRATIONS = [
@@ -13,4 +14,5 @@ export const MIGRATIONS = [
   CreateBuildsCircuitsUploads1796185917823,
   CreateOutboxTokensStockOrders1796186373635,
   CreateReviewsAuditNotifications1796186679267,
+  StoreApprovedEvaluation1796300000000,
 ];
