@@ -16,7 +16,7 @@ export { ruleRegistry } from './rules/registry.js';
 export * from './lines/cut-length.js';
 export * from './lines/supports.js';
 export * from './lines/heat.js';
-export type { LineReport, PlacedSleeve } from './lines/line-report.js';
+export type { LineReport, PlacedSleeve, SleeveProblem } from './lines/line-report.js';
 export type { LineAnalysis, HoseStatus } from './lines/analyse-line.js';
 export type { ResolvedStack, StackItem, StackJoint } from './lines/end-stack.js';
 export type { PortEntry } from './lines/port-entry.js';

@@ -187,6 +187,9 @@ const adapterRows: AdapterRow[] = [
   { id: 'demo-adapter-f37-8f-6m', supplierId: HARBOR, pn: 'HL-3410-0806', description: '-8 37° flare female swivel to -6 37° flare male reducer', price: 880, a: end('flare37', '-8', 'female'), b: end('flare37', '-6', 'male'), bodyLengthIn: 1.0, boreIn: 0.31 },
 ];
 
+/** Invented working pressure for the demo's steel fittings and plugs (far above any demo circuit). */
+const DEMO_FITTING_PSI = 3000;
+
 const adapters: PartOf<'adapter'>[] = adapterRows.map((r) => ({
   ...common({ id: r.id, supplierId: r.supplierId, supplierPartNumber: r.pn, description: r.description, priceCents: r.price, stockOnHand: 2 }),
   kind: 'adapter' as const,
@@ -198,6 +201,7 @@ const adapters: PartOf<'adapter'>[] = adapterRows.map((r) => ({
     boreIn: r.boreIn,
     features: r.features ?? [],
     ...(r.seal ? { seal: r.seal } : {}),
+    maxPressurePsi: DEMO_FITTING_PSI,
   },
 }));
 
@@ -205,15 +209,15 @@ const bulkheads: PartOf<'bulkhead'>[] = [
   {
     ...common({ id: 'demo-bulkhead-f37-6', supplierId: RIDGEBACK, supplierPartNumber: 'RF-560-06', description: '-6 37° flare male bulkhead union with jam nut', priceCents: 1650 }),
     kind: 'bulkhead',
-    attributes: { a: end('flare37', '-6', 'male'), b: end('flare37', '-6', 'male'), bodyLengthIn: 2.2, boreIn: 0.31 },
+    attributes: { a: end('flare37', '-6', 'male'), b: end('flare37', '-6', 'male'), bodyLengthIn: 2.2, boreIn: 0.31, maxPressurePsi: DEMO_FITTING_PSI },
   },
 ];
 
 const plugs: PartOf<'plug'>[] = [
-  { ...common({ id: 'demo-plug-orb6', supplierId: RIDGEBACK, supplierPartNumber: 'RF-650-06', description: '-6 O-ring boss plug', priceCents: 385 }), kind: 'plug', attributes: { connection: end('orb', '-6', 'male'), seal: oring('906') } },
-  { ...common({ id: 'demo-plug-orb8', supplierId: RIDGEBACK, supplierPartNumber: 'RF-650-08', description: '-8 O-ring boss plug', priceCents: 445 }), kind: 'plug', attributes: { connection: end('orb', '-8', 'male'), seal: oring('908') } },
-  { ...common({ id: 'demo-plug-npt4', supplierId: HARBOR, supplierPartNumber: 'HL-5004-04', description: '1/4 NPT hex pipe plug', priceCents: 260 }), kind: 'plug', attributes: { connection: end('npt', '1/4', 'male') } },
-  { ...common({ id: 'demo-cap-f37-6', supplierId: HARBOR, supplierPartNumber: 'HL-5106-06', description: '-6 37° flare cap (female)', priceCents: 310 }), kind: 'plug', attributes: { connection: end('flare37', '-6', 'female') } },
+  { ...common({ id: 'demo-plug-orb6', supplierId: RIDGEBACK, supplierPartNumber: 'RF-650-06', description: '-6 O-ring boss plug', priceCents: 385 }), kind: 'plug', attributes: { connection: end('orb', '-6', 'male'), seal: oring('906'), maxPressurePsi: DEMO_FITTING_PSI } },
+  { ...common({ id: 'demo-plug-orb8', supplierId: RIDGEBACK, supplierPartNumber: 'RF-650-08', description: '-8 O-ring boss plug', priceCents: 445 }), kind: 'plug', attributes: { connection: end('orb', '-8', 'male'), seal: oring('908'), maxPressurePsi: DEMO_FITTING_PSI } },
+  { ...common({ id: 'demo-plug-npt4', supplierId: HARBOR, supplierPartNumber: 'HL-5004-04', description: '1/4 NPT hex pipe plug', priceCents: 260 }), kind: 'plug', attributes: { connection: end('npt', '1/4', 'male'), maxPressurePsi: DEMO_FITTING_PSI } },
+  { ...common({ id: 'demo-cap-f37-6', supplierId: HARBOR, supplierPartNumber: 'HL-5106-06', description: '-6 37° flare cap (female)', priceCents: 310 }), kind: 'plug', attributes: { connection: end('flare37', '-6', 'female'), maxPressurePsi: DEMO_FITTING_PSI } },
 ];
 
 // --- Cushion clamps by hose OD (packs of 10) and fire sleeve by OD range (by the foot) --------

@@ -76,7 +76,11 @@ export const adapterAttributesSchema = z.object({
   maxPressurePsi: positive.optional(),
 });
 
-export const plugAttributesSchema = z.object({ connection: connectionSpecSchema, seal: sealNeedSchema.optional() });
+export const plugAttributesSchema = z.object({
+  connection: connectionSpecSchema,
+  seal: sealNeedSchema.optional(),
+  maxPressurePsi: positive.optional(),
+});
 export const clampAttributesSchema = z.object({ fitsOd: odRange });
 export const sleeveAttributesSchema = z.object({ fitsOd: odRange, maxTempF: z.number() });
 export const sealAttributesSchema = z.object({ seal: sealNeedSchema });

@@ -1,6 +1,7 @@
-/** A dash size is the tube OD in sixteenths of an inch (-6 = 6/16 = 3/8 in): trade convention. */
+/** The international inch (1959 agreement; NIST SP 811 Appendix B): exactly 25.4 mm. The one place for it. */
 export const MM_PER_IN = 25.4;
 
+/** A dash size is the tube OD in sixteenths of an inch (-6 = 6/16 = 3/8 in): trade convention. */
 export function dashToTubeOd(dash: number): { in: number; mm: number } {
   if (!(dash > 0) || !Number.isFinite(dash)) throw new RangeError('A dash size must be a positive number');
   const inches = dash / 16;

@@ -3,6 +3,7 @@ import type { LineAnalysis } from '../lines/analyse-line.js';
 import type { PortEntry } from '../lines/port-entry.js';
 import type { ShopRules } from '../rules/shop-rules.js';
 import type { BillOfMaterials, BomRow } from './bom-row.js';
+import { taxOf } from './order-sheet.js';
 import { priceOf } from './price.js';
 import { plugSealNeeds, sealDescription, sealKey, stackSealNeeds } from './seal-needs.js';
 
@@ -112,7 +113,7 @@ export function billOfMaterials(input: BomInput): BillOfMaterials {
   const sortKey = (r: BomRow) => r.partId ?? `\uffff${r.description}`; // catalogue parts first, then the unlisted
   rows.sort((a, b) => KIND_ORDER.indexOf(a.kind) - KIND_ORDER.indexOf(b.kind) || (sortKey(a) < sortKey(b) ? -1 : sortKey(a) > sortKey(b) ? 1 : 0));
   const subtotalCents = rows.reduce((sum, r) => sum + (r.priceCents ?? 0), 0);
-  const taxCents = Math.round((subtotalCents * input.taxRatePercent) / 100);
+  const taxCents = taxOf(subtotalCents, input.taxRatePercent);
   return {
     rows,
     subtotalCents,

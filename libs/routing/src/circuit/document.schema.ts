@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { connectionSpecSchema, fluidSchema } from '@linesmith/catalog';
+import { connectionSpecSchema, fluidSchema, portRequirementSchema as partRequirementSchema } from '@linesmith/catalog';
 
 /** The current version tag of a saved circuit document. Older tags are read through `migrateCircuitDocument`. */
 export const CIRCUIT_SCHEMA = 'linesmith.circuit/1';
@@ -47,8 +47,8 @@ export const mountGroupSchema = z.enum(['powertrain', 'chassis', 'axle']);
 export const portRoleSchema = z.enum(['out', 'return', 'feed', 'drain', 'vent']);
 export const heatZoneKindSchema = z.enum(['exhaust', 'turbo', 'other']);
 
-export const portRequirementSchema = z.object({
-  feature: z.string().trim().min(1),
+/** The catalogue's requirement (what the part must carry) plus why the port asks for it, shown in the flag. */
+export const portRequirementSchema = partRequirementSchema.extend({
   reason: z.string().trim().min(1),
 });
 

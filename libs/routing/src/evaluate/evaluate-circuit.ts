@@ -32,6 +32,7 @@ export function buildRuleContext(doc: CircuitDocument, parts: readonly Part[], r
   }
   const pxPerIn = doc.calibration ? scaleOf(doc.calibration) : null;
   const usableScale = pxPerIn !== null && Number.isFinite(pxPerIn) && pxPerIn > 0 ? pxPerIn : null;
+  // Without a scale the zones cannot be placed in inches; scale-missing then says the heat check did not run.
   const zones = prepareZones(
     usableScale === null
       ? []

@@ -10,7 +10,7 @@ import type { ShopRules } from '../rules/shop-rules.js';
 import { cutLength, cutLengthTolerance, requiredSlack } from './cut-length.js';
 import { resolveEndStack, type Mater, type ResolvedStack } from './end-stack.js';
 import { heatExposure, type HeatExposure, type prepareZones } from './heat.js';
-import type { LineReport } from './line-report.js';
+import type { LineReport, PlacedSleeve, SleeveProblem } from './line-report.js';
 import type { PortEntry } from './port-entry.js';
 import { proposeSupports, unsupportedSpans } from './supports.js';
 
@@ -118,8 +118,13 @@ export function analyseLine(line: CircuitLine, env: LineEnvironment): LineAnalys
     supportPositions.push(s.atIn);
   }
   const spans = basisIn === null ? [] : unsupportedSpans(lengthForSupports, supportPositions);
-  const placed: LineReport['sleeves']['placed'] = [];
-  for (const s of line.sleeves) placed.push({ id: s.id, startIn: s.startIn, endIn: s.endIn, lengthIn: s.endIn - s.startIn, partId: s.partId });
+  const placed: PlacedSleeve[] = [];
+  for (const s of line.sleeves) {
+    const problem = sleeveProblem(s.partId, env.parts, hose);
+    const sleeve: PlacedSleeve = { id: s.id, startIn: s.startIn, endIn: s.endIn, lengthIn: s.endIn - s.startIn, partId: s.partId, covers: !problem };
+    if (problem) sleeve.problem = problem;
+    placed.push(sleeve);
+  }
   const requiredIn = heat?.required ?? [];
   const plannedIn = heat?.planned ?? [];
 
@@ -149,7 +154,11 @@ export function analyseLine(line: CircuitLine, env: LineEnvironment): LineAnalys
       plannedIn,
       plannedLengthIn: totalLength(plannedIn),
       placed,
-      uncoveredIn: subtractIntervals(requiredIn, placed.map((s) => ({ start: s.startIn, end: s.endIn })), 1e-6),
+      uncoveredIn: subtractIntervals(
+        requiredIn,
+        placed.filter((s) => s.covers).map((s) => ({ start: s.startIn, end: s.endIn })),
+        1e-6,
+      ),
       contact: heat?.contact ?? false,
       zoneIds: heat?.zones.map((z) => z.zoneId) ?? [],
     },
@@ -157,6 +166,16 @@ export function analyseLine(line: CircuitLine, env: LineEnvironment): LineAnalys
   const clamp = hose ? pickClamp(env.clamps, hose.attributes.odIn) : undefined;
   if (clamp) report.clampPartId = clamp.id;
   return { line, from, to, hose, hoseStatus, stacks, centreline, heat, requiredSlackIn, report };
+}
+
+/** Only a catalogue sleeve that fits the hose's outside diameter shields it from heat. */
+function sleeveProblem(partId: string | null, parts: ReadonlyMap<string, Part>, hose: HosePart | undefined): SleeveProblem | undefined {
+  if (partId === null) return 'no-part';
+  const part = parts.get(partId);
+  if (!part) return 'missing';
+  if (part.kind !== 'sleeve') return 'not-a-sleeve';
+  if (!hose) return 'no-hose';
+  return fitsOd(part, hose.attributes.odIn) ? undefined : 'does-not-fit';
 }
 
 function stretchHeat(heat: HeatExposure, k: number): HeatExposure {

@@ -1,12 +1,18 @@
 import type { Interval } from '../geometry/intervals.js';
 import type { Span } from './supports.js';
 
+/** Why a placed sleeve gives no heat cover: no part picked, unknown part, a part that is not a sleeve, a sleeve for another hose OD, or no hose to fit it on. */
+export type SleeveProblem = 'no-part' | 'missing' | 'not-a-sleeve' | 'does-not-fit' | 'no-hose';
+
 export interface PlacedSleeve {
   id: string;
   startIn: number;
   endIn: number;
   lengthIn: number;
   partId: string | null;
+  /** True when the sleeve counts as heat cover: its part is a sleeve that fits the hose OD. */
+  covers: boolean;
+  problem?: SleeveProblem;
 }
 
 /** Every term of one line's cut length, supports and sleeves, for the cut list and the inspector. */
@@ -45,7 +51,7 @@ export interface LineReport {
     plannedIn: Interval[];
     plannedLengthIn: number;
     placed: PlacedSleeve[];
-    /** Required stretches no placed sleeve covers. */
+    /** Required stretches no covering sleeve (see PlacedSleeve.covers) covers. */
     uncoveredIn: Interval[];
     contact: boolean;
     zoneIds: string[];

@@ -2,6 +2,9 @@ import { z } from 'zod';
 
 const inchesAtLeast0 = z.number().finite().nonnegative();
 
+/** The steps a cut length may be rounded up to: 1/16, 1/8, 1/4 or 1/2 in (a tape reads no finer, and coarser wastes hose). */
+export const CUT_ROUNDING_STEPS_IN = [0.0625, 0.125, 0.25, 0.5] as const;
+
 /** The shop's thresholds used by the rules engine (editable by the admin). */
 export const shopRulesSchema = z.object({
   supportSpacingIn: z.number().finite().positive().default(18),
@@ -12,7 +15,12 @@ export const shopRulesSchema = z.object({
   slackMinIn: inchesAtLeast0.default(1.5),
   slackPercent: z.number().finite().min(0).max(50).default(4),
   restrictionRatio: z.number().finite().min(0).max(1).default(0.8),
-  cutRoundingIn: z.number().finite().positive().max(1).default(0.125),
+  cutRoundingIn: z
+    .number()
+    .refine((v) => (CUT_ROUNDING_STEPS_IN as readonly number[]).includes(v), {
+      message: 'Cut lengths round up to 1/16, 1/8, 1/4 or 1/2 in',
+    })
+    .default(0.125),
   trimAllowanceIn: inchesAtLeast0.default(0.5),
 });
 

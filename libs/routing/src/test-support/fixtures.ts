@@ -52,6 +52,7 @@ export const orbToFlare6 = part({
     boreIn: 0.3,
     features: [],
     seal: { type: 'o-ring', as568: '906' },
+    maxPressurePsi: 3000,
   },
 });
 
@@ -68,6 +69,7 @@ export const orbToFlare6LongNose = part({
     boreIn: 0.3,
     features: ['long-nose'],
     seal: { type: 'o-ring', as568: '906' },
+    maxPressurePsi: 3000,
   },
 });
 
@@ -103,7 +105,7 @@ export const orbPlug6 = part({
   kind: 'plug',
   description: '-6 O-ring boss plug',
   priceCents: 300,
-  attributes: { connection: { family: 'orb', size: '-6', gender: 'male' } },
+  attributes: { connection: { family: 'orb', size: '-6', gender: 'male' }, maxPressurePsi: 3000 },
 });
 
 export const testParts: Part[] = [hose6, hoseEnd6, orbToFlare6, orbToFlare6LongNose, clamp11_16, fireSleeve, oring906, orbPlug6];

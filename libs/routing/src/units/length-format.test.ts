@@ -4,6 +4,7 @@ import {
   barToPsi,
   celsiusToFahrenheit,
   fahrenheitToCelsius,
+  formatCutLength,
   formatInches,
   formatLength,
   inToMm,
@@ -97,5 +98,27 @@ describe('unit conversions', () => {
     expect(fahrenheitToCelsius(32)).toBe(0);
     expect(fahrenheitToCelsius(-40)).toBe(-40);
     expect(celsiusToFahrenheit(150)).toBe(302); // SAE J1532 class 150 °C
+  });
+});
+
+describe('formatCutLength (common practice: cut long, never short; 1 in = 25.4 mm exactly, NIST SP 811 App. B)', () => {
+  it.each([
+    [23.625, 'in', '23-5/8"'],
+    [23.6251, 'in', '23-11/16"'], // a hair over 5/8 rounds up, where formatInches would round down
+    [23.6875, 'in', '23-11/16"'],
+    [23.625, 'mm', '601 mm'], // 600.075 mm; formatLength shows 600 mm, 0.075 mm short
+    [10, 'mm', '254 mm'], // exactly 254 mm: no step up from float noise
+    [0.5, 'mm', '13 mm'], // 12.7 mm
+  ] as const)('%d in as %s → %s', (value, unit, text) => {
+    expect(formatCutLength(value, unit)).toBe(text);
+  });
+
+  it('is never shorter than the length it shows', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 0, max: 2000, noNaN: true }), (value) => {
+        expect(Number.parseInt(formatCutLength(value, 'mm'), 10)).toBeGreaterThanOrEqual(inToMm(value) - 1e-6);
+        expect(parseInches(formatCutLength(value, 'in'))).toBeGreaterThanOrEqual(value - 1e-6);
+      }),
+    );
   });
 });

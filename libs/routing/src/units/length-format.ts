@@ -3,8 +3,10 @@
  * Stored values are plain numbers with the unit in the field name (lengthIn, pressurePsi).
  */
 
-/** The international inch (1959 agreement; NIST SP 811 Appendix B): exactly 25.4 mm. */
-export const MM_PER_IN = 25.4;
+import { MM_PER_IN } from '@linesmith/catalog';
+
+/** The international inch, kept once in the catalogue library (the lower one) and re-exported here. */
+export { MM_PER_IN };
 
 /** 1 psi = 1 lbf/in² = 4.4482216152605 N / (0.0254 m)² = 6894.757293168361 Pa (NIST SP 811 B.8). */
 export const PA_PER_PSI = 4.4482216152605 / (0.0254 * 0.0254);
@@ -83,6 +85,19 @@ export function parseInches(text: string): number {
 export function formatLength(valueIn: number, unit: LengthUnit): string {
   if (unit === 'mm') return `${Math.round(inToMm(valueIn))} mm`;
   return `${formatInches(valueIn)}"`;
+}
+
+/** Float noise allowed below a step before rounding up: 23.6875 stored as 23.68750000001 stays 23-11/16. */
+const ROUND_UP_NOISE = 1e-9;
+
+/**
+ * A cut length for display, rounded UP (cut long, never short — common practice): to the next
+ * 1/16 in as a fraction with the inch mark, or to the next whole millimetre.
+ */
+export function formatCutLength(valueIn: number, unit: LengthUnit): string {
+  if (!Number.isFinite(valueIn)) throw new RangeError(`Cannot format ${valueIn} as a cut length`);
+  if (unit === 'mm') return `${Math.ceil(inToMm(valueIn) - ROUND_UP_NOISE)} mm`;
+  return `${formatInches(Math.ceil(valueIn * 16 - ROUND_UP_NOISE) / 16)}"`;
 }
 
 export function formatPressure(psi: number, unit: PressureUnit): string {

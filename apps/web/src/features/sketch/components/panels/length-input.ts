@@ -1,4 +1,4 @@
-import { formatInches, mmToIn, parseInches, type LengthUnit } from '@linesmith/routing';
+import { formatInches, inToMm, mmToIn, parseInches, type LengthUnit } from '@linesmith/routing';
 
 /** Reads a typed length in the user's unit: fractional inches (`23 11/16`) or millimetres. */
 export function parseLength(text: string, unit: LengthUnit): number {
@@ -12,4 +12,4 @@ export function parseLength(text: string, unit: LengthUnit): number {
 
 /** A length for an input field, without the unit mark. */
 export const lengthFieldText = (valueIn: number | null | undefined, unit: LengthUnit): string =>
-  valueIn === null || valueIn === undefined ? '' : unit === 'mm' ? String(Math.round(valueIn * 25.4)) : formatInches(valueIn);
+  valueIn === null || valueIn === undefined ? '' : unit === 'mm' ? String(Math.round(inToMm(valueIn))) : formatInches(valueIn);

@@ -1,4 +1,4 @@
-import { formatLength, pxPerIn, type CircuitDocument, type LengthUnit } from '@linesmith/routing';
+import { formatLength, mmToIn, pxPerIn, type CircuitDocument, type LengthUnit } from '@linesmith/routing';
 
 /** Sketch pixels per inch, or null when the sketch is not calibrated. */
 export function sketchScale(doc: CircuitDocument): number | null {
@@ -11,6 +11,6 @@ export function sketchScale(doc: CircuitDocument): number | null {
 export function scaleLabel(doc: CircuitDocument, unit: LengthUnit): string {
   const scale = sketchScale(doc);
   if (scale === null || !doc.calibration) return 'Not calibrated: press C and click two points a known distance apart';
-  const perUnit = unit === 'mm' ? `${(scale / 25.4).toFixed(2)} px per mm` : `${scale.toFixed(1)} px per inch`;
+  const perUnit = unit === 'mm' ? `${(scale * mmToIn(1)).toFixed(2)} px per mm` : `${scale.toFixed(1)} px per inch`;
   return `Scale: ${perUnit} (${formatLength(doc.calibration.knownIn, unit)} known)`;
 }
