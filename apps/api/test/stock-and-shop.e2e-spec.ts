@@ -65,6 +65,40 @@ describe('stock adjustments and the shop profile (e2e)', () => {
     await testApp.http().post(`/api/parts/${partId}/stock-adjustments`).set(as(clerkToken)).send({ delta: 0, reason: 'x' }).expect(400);
   });
 
+  it('changes stock only through adjustments: PATCH ignores stockOnHand and refuses a new sale unit while stock is on hand', async () => {
+    const partId = ids.get('demo-hose-6-rubber') as string;
+    const current = (await testApp.http().get(`/api/parts/${partId}`).set(as(clerkToken)).expect(200)).body as { stockOnHand: number; version: number };
+    expect(current.stockOnHand).toBeGreaterThan(0);
+    const adjustmentsBefore = await testApp.dataSource.getRepository(StockAdjustmentEntity).countBy({ partId });
+    const edited = await testApp
+      .http()
+      .patch(`/api/parts/${partId}`)
+      .set(as(clerkToken))
+      .send({ version: current.version, stockOnHand: current.stockOnHand + 500, priceCents: 1234 })
+      .expect(200);
+    expect(edited.body).toMatchObject({ stockOnHand: current.stockOnHand, priceCents: 1234 });
+    const refused = await testApp
+      .http()
+      .patch(`/api/parts/${partId}`)
+      .set(as(clerkToken))
+      .send({ version: edited.body.version, saleUnit: { type: 'each' } })
+      .expect(400);
+    expect(refused.body.issues).toEqual([{ path: 'saleUnit', message: expect.stringMatching(/on hand/) }]);
+    expect(await testApp.dataSource.getRepository(StockAdjustmentEntity).countBy({ partId })).toBe(adjustmentsBefore);
+  });
+
+  it('books the opening stock of a new part as its first adjustment', async () => {
+    const created = await testApp
+      .http()
+      .post('/api/parts')
+      .set(as(clerkToken))
+      .send({ kind: 'clamp', description: 'Cushion clamp, opening stock', stockOnHand: 40, attributes: { fitsOd: { minIn: 0.5, maxIn: 0.6 } } })
+      .expect(201);
+    expect(created.body.stockOnHand).toBe(40);
+    const history = await testApp.http().get(`/api/parts/${created.body.id}/stock-adjustments`).set(as(clerkToken)).expect(200);
+    expect(history.body).toEqual([expect.objectContaining({ delta: 40, reason: 'Opening stock' })]);
+  });
+
   it('retires a part instead of deleting it', async () => {
     const partId = ids.get('demo-hose-8-ptfe') as string;
     const current = (await testApp.http().get(`/api/parts/${partId}`).set(as(clerkToken)).expect(200)).body as { version: number };

@@ -19,7 +19,7 @@ export function toPartDto(row: PartEntity): PartDto {
   } as PartDto;
 }
 
-/** The columns a validated part writes. */
+/** The columns a validated part writes; never the stock on hand, which only stock adjustments change. */
 export function toPartColumns(part: PartFields): Partial<PartEntity> {
   return {
     kind: part.kind,
@@ -28,7 +28,6 @@ export function toPartColumns(part: PartFields): Partial<PartEntity> {
     description: part.description,
     priceCents: part.priceCents,
     saleUnit: part.saleUnit,
-    stockOnHand: part.stockOnHand,
     retired: part.retired,
     attributes: part.attributes as Record<string, unknown>,
   };

@@ -28,7 +28,7 @@ export class PartsController {
   @Roles('admin', 'parts-clerk')
   @Post()
   create(@CurrentUser() caller: AuthUser, @Body() body: CreatePartDto): Promise<PartDto> {
-    return this.parts.create(caller.shopId, body);
+    return this.parts.create(caller.shopId, caller.userId, body);
   }
 
   @Roles('admin', 'parts-clerk')

@@ -3,15 +3,17 @@ import { Test } from '@nestjs/testing';
 import { getRepositoryToken } from '@nestjs/typeorm';
 import { ConflictError, NotFoundError, ValidationError } from '../common/errors/app-error.js';
 import { SuppliersService } from '../suppliers/suppliers.service.js';
-import type { ListPartsQuery } from './dto/part-input.schemas.js';
+import { StockAdjustmentEntity } from '../stock/stock-adjustment.entity.js';
+import { updatePartSchema, type ListPartsQuery } from './dto/part-input.schemas.js';
 import type { PartDto } from './dto/part.dto.js';
 import { PartEntity } from './part.entity.js';
-import { PartsService } from './parts.service.js';
+import { OPENING_STOCK_REASON, PartsService } from './parts.service.js';
 import { ShopCatalogueService } from './shop-catalogue.service.js';
 
 const SHOP = '11111111-1111-4111-8111-111111111111';
 const PART_ID = '33333333-3333-4333-8333-333333333333';
 const SUPPLIER = '44444444-4444-4444-8444-444444444444';
+const ACTOR = '55555555-5555-4555-8555-555555555555';
 
 const catalogueParts: PartDto[] = demoParts.map((part) => ({ ...part, version: 1 }));
 const query = (overrides: Partial<ListPartsQuery> = {}): ListPartsQuery => ({
@@ -49,13 +51,19 @@ describe('PartsService', () => {
     create: jest.fn((fields: Partial<PartEntity>) => Object.assign(new PartEntity(), fields)),
     save: jest.fn(),
     update: jest.fn(),
+    manager: { transaction: jest.fn() },
   };
+  const adjustments = { insert: jest.fn() };
   const catalogue = { partsOf: jest.fn(), invalidate: jest.fn() };
   const suppliers = { existsInShop: jest.fn() };
 
   beforeEach(async () => {
     jest.resetAllMocks();
     repo.create.mockImplementation((fields: Partial<PartEntity>) => Object.assign(new PartEntity(), fields));
+    // One transaction manager whose repositories are the mocks.
+    repo.manager.transaction.mockImplementation((work: (manager: unknown) => unknown) =>
+      work({ getRepository: (entity: unknown) => (entity === StockAdjustmentEntity ? adjustments : repo) }),
+    );
     catalogue.partsOf.mockResolvedValue(catalogueParts);
     const moduleRef = await Test.createTestingModule({
       providers: [
@@ -97,7 +105,7 @@ describe('PartsService', () => {
     it('validates with the catalogue schema, checks the supplier belongs to the shop and drops the cache', async () => {
       suppliers.existsInShop.mockResolvedValue(true);
       repo.save.mockImplementation(async (row: PartEntity) => Object.assign(row, { id: PART_ID, version: 1 }));
-      const part = await service.create(SHOP, {
+      const part = await service.create(SHOP, ACTOR, {
         kind: 'clamp',
         supplierId: SUPPLIER,
         description: ' Cushion clamp ',
@@ -109,8 +117,19 @@ describe('PartsService', () => {
       expect(catalogue.invalidate).toHaveBeenCalledWith(SHOP);
     });
 
+    it('books an opening stock as the first stock adjustment, and writes none without one', async () => {
+      repo.save.mockImplementation(async (row: PartEntity) => Object.assign(row, { id: PART_ID, version: 1 }));
+      const body = { kind: 'clamp', description: 'Cushion clamp', stockOnHand: 12, attributes: { fitsOd: { minIn: 0.5, maxIn: 0.6 } } };
+      await service.create(SHOP, ACTOR, body);
+      expect(repo.create).toHaveBeenCalledWith(expect.objectContaining({ stockOnHand: 12 }));
+      expect(adjustments.insert).toHaveBeenCalledWith({ shopId: SHOP, partId: PART_ID, delta: 12, reason: OPENING_STOCK_REASON, actorId: ACTOR });
+      adjustments.insert.mockClear();
+      await service.create(SHOP, ACTOR, { ...body, stockOnHand: 0 });
+      expect(adjustments.insert).not.toHaveBeenCalled();
+    });
+
     it('reports attribute problems with their paths and never writes', async () => {
-      const attempt = service.create(SHOP, { kind: 'hose', description: 'Hose', attributes: { dash: 6 } });
+      const attempt = service.create(SHOP, ACTOR, { kind: 'hose', description: 'Hose', attributes: { dash: 6 } });
       await expect(attempt).rejects.toBeInstanceOf(ValidationError);
       const error = (await attempt.catch((caught: unknown) => caught)) as ValidationError;
       expect(error.issues.map((issue) => issue.path)).toEqual(expect.arrayContaining(['attributes.idIn', 'attributes.fluids']));
@@ -121,7 +140,7 @@ describe('PartsService', () => {
       suppliers.existsInShop.mockResolvedValue(true);
       repo.save.mockRejectedValue(Object.assign(new Error('duplicate key'), { driverError: { code: '23505' } }));
       const body = { kind: 'clamp', supplierId: SUPPLIER, supplierPartNumber: 'C-1', description: 'Clamp', attributes: { fitsOd: { minIn: 0.5, maxIn: 0.6 } } };
-      await expect(service.create(SHOP, body)).rejects.toBeInstanceOf(ConflictError);
+      await expect(service.create(SHOP, ACTOR, body)).rejects.toBeInstanceOf(ConflictError);
     });
   });
 
@@ -137,6 +156,30 @@ describe('PartsService', () => {
       );
       expect(suppliers.existsInShop).not.toHaveBeenCalled();
       expect(part).toMatchObject({ priceCents: 650, version: 3 });
+    });
+
+    it('never takes the stock on hand from a change: the schema drops it and the update does not write it', async () => {
+      const changes = updatePartSchema.parse({ version: 2, stockOnHand: 999, priceCents: 650 });
+      expect(changes).toEqual({ version: 2, priceCents: 650 });
+      repo.findOneBy.mockResolvedValue(clampRow());
+      repo.update.mockResolvedValue({ affected: 1 });
+      await service.update(SHOP, PART_ID, changes);
+      expect(repo.update.mock.calls[0][1]).not.toHaveProperty('stockOnHand');
+    });
+
+    it('refuses a sale-unit change while stock is on hand (stock counts sale units), and allows it at zero stock', async () => {
+      repo.findOneBy.mockResolvedValue(clampRow({ stockOnHand: 3 }));
+      const refused = (await service
+        .update(SHOP, PART_ID, { version: 2, saleUnit: { type: 'pack', size: 10 } })
+        .catch((caught: unknown) => caught)) as ValidationError;
+      expect(refused).toBeInstanceOf(ValidationError);
+      expect(refused.issues).toEqual([{ path: 'saleUnit', message: expect.stringMatching(/3 piece\(s\) are on hand/) }]);
+      expect(repo.update).not.toHaveBeenCalled();
+
+      repo.findOneBy.mockResolvedValue(clampRow({ stockOnHand: 0 }));
+      repo.update.mockResolvedValue({ affected: 1 });
+      await service.update(SHOP, PART_ID, { version: 2, saleUnit: { type: 'pack', size: 10 } });
+      expect(repo.update).toHaveBeenCalledWith({ id: PART_ID, shopId: SHOP, version: 2 }, expect.objectContaining({ saleUnit: { type: 'pack', size: 10 } }));
     });
 
     it('answers 409 with the current part when the version is stale, 404 for another shop', async () => {

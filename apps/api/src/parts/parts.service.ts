@@ -6,6 +6,7 @@ import { z } from 'zod';
 import { ConflictError, NotFoundError, ValidationError } from '../common/errors/app-error.js';
 import { isUniqueViolation } from '../common/errors/unique-violation.js';
 import { parseWithSchema } from '../common/validation/zod-validation.pipe.js';
+import { StockAdjustmentEntity } from '../stock/stock-adjustment.entity.js';
 import { SuppliersService } from '../suppliers/suppliers.service.js';
 import type { Page } from '../users/users.service.js';
 import type { ListPartsQuery, NewPartBody, PartChanges, PartFields } from './dto/part-input.schemas.js';
@@ -13,12 +14,16 @@ import type { PartDto } from './dto/part.dto.js';
 import { matchesPartFilter, sortParts } from './part-filters.js';
 import { PartEntity } from './part.entity.js';
 import { toPartColumns, toPartDto } from './part.mapper.js';
+import { saleUnitChangeRefusal } from './sale-unit-change.js';
 import { ShopCatalogueService } from './shop-catalogue.service.js';
 
 const uuid = z.uuid();
 
 // The id `partSchema` asks for while a part is not saved yet; it never reaches the database.
 const UNSAVED_ID = 'unsaved';
+
+/** The reason of the stock adjustment that books a new part's opening stock. */
+export const OPENING_STOCK_REASON = 'Opening stock';
 
 /**
  * Checks a whole part with the catalogue library's `partSchema` — the one definition of a valid
@@ -51,11 +56,22 @@ export class PartsService {
     return toPartDto(await this.getOwn(shopId, partId));
   }
 
-  async create(shopId: string, body: NewPartBody): Promise<PartDto> {
+  /** A new part; an opening stock is booked as the part's first stock adjustment, so its history starts with it. */
+  async create(shopId: string, actorId: string, body: NewPartBody): Promise<PartDto> {
     const fields = validatePart(body);
     await this.assertOwnSupplier(shopId, fields.supplierId);
-    const row = this.parts.create({ ...toPartColumns(fields), shopId, demoKey: null });
-    const saved = await this.write(() => this.parts.save(row));
+    const saved = await this.write(() =>
+      this.parts.manager.transaction(async (manager) => {
+        const parts = manager.getRepository(PartEntity);
+        const row = await parts.save(parts.create({ ...toPartColumns(fields), stockOnHand: fields.stockOnHand, shopId, demoKey: null }));
+        if (fields.stockOnHand !== 0) {
+          await manager
+            .getRepository(StockAdjustmentEntity)
+            .insert({ shopId, partId: row.id, delta: fields.stockOnHand, reason: OPENING_STOCK_REASON, actorId });
+        }
+        return row;
+      }),
+    );
     this.catalogue.invalidate(shopId);
     return toPartDto(saved);
   }
@@ -71,6 +87,9 @@ export class PartsService {
     const { version: _current, ...currentPart } = toPartDto(current);
     const fields = validatePart({ ...currentPart, ...edits }, partId);
     if (fields.supplierId !== current.supplierId) await this.assertOwnSupplier(shopId, fields.supplierId);
+    // The version guard below also fails if a stock adjustment lands meanwhile (it moves the version).
+    const refusal = saleUnitChangeRefusal(current.saleUnit, fields.saleUnit, current.stockOnHand);
+    if (refusal) throw new ValidationError([{ path: 'saleUnit', message: refusal }], refusal);
     const result = await this.write(() => this.parts.update({ id: partId, shopId, version }, toPartColumns(fields) as QueryDeepPartialEntity<PartEntity>));
     this.catalogue.invalidate(shopId);
     if (!result.affected) throw this.staleVersion(await this.getOwn(shopId, partId));

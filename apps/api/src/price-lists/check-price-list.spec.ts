@@ -46,4 +46,14 @@ describe('price-list rows', () => {
     expect(check.report.map((issue) => issue.column)).toEqual(['PN', 'Price', 'Unit']);
     expect(check.counts).toEqual({ new: 0, updated: 0, unchanged: 1, errors: 1 });
   });
+
+  it('refuses a new sale unit on the row of a part with stock on hand, and takes it at zero stock', () => {
+    const sheet = { headers: ['PN', 'Price', 'Unit'], rows: [{ row: 2, cells: [clamp.supplierPartNumber, 1.25, 'each'] }] };
+    const stocked = checkPriceList(sheet, { partNumber: 0, price: 1, saleUnit: 2 }, sheet.headers, [{ ...clamp, stockOnHand: 4 }]);
+    expect(stocked.changes).toEqual([]);
+    expect(stocked.report).toEqual([{ row: 2, column: 'Unit', message: expect.stringMatching(/4 pack\(s\) of 10 are on hand/) }]);
+    const empty = checkPriceList(sheet, { partNumber: 0, price: 1, saleUnit: 2 }, sheet.headers, [{ ...clamp, stockOnHand: 0 }]);
+    expect(empty.report).toEqual([]);
+    expect(empty.changes).toEqual([expect.objectContaining({ saleUnit: { type: 'each' }, status: 'updated' })]);
+  });
 });

@@ -1,4 +1,5 @@
 import type { Part, SaleUnit } from '@linesmith/catalog';
+import { saleUnitChangeRefusal, sameSaleUnit } from '../parts/sale-unit-change.js';
 import type { MappingField } from './dto/price-list.schemas.js';
 import type { ImportIssue } from './price-list-errors.js';
 import type { CellValue, PriceListSheet } from './read-price-list.js';
@@ -59,10 +60,6 @@ export function parseSaleUnit(unit: CellValue, packSize: CellValue): SaleUnit | 
   return 'Use each, foot or pack (with a pack size).';
 }
 
-function sameSaleUnit(a: SaleUnit, b: SaleUnit): boolean {
-  return a.type === b.type && (a.type !== 'pack' || (b.type === 'pack' && a.size === b.size));
-}
-
 /**
  * Checks every row against the supplier's catalogue parts (matched by supplier part number,
  * ignoring case): prices, sale units and descriptions; duplicates within the file and unknown
@@ -104,6 +101,8 @@ export function checkPriceList(
       if (typeof parsed === 'string') issue('saleUnit', parsed);
       else saleUnit = parsed;
     }
+    const refusal = part && saleUnit ? saleUnitChangeRefusal(part.saleUnit, saleUnit, part.stockOnHand) : undefined;
+    if (refusal) issue('saleUnit', refusal);
     let description = part?.description ?? '';
     if (columns.description !== undefined) {
       const text = cellOf(cells, 'description');

@@ -12,8 +12,13 @@ export const createPartSchema = z.looseObject({});
 export class CreatePartDto extends zodDto(createPartSchema) {}
 export type NewPartBody = z.output<typeof createPartSchema>;
 
-/** Changed fields against a version; the service merges them into the current part and validates the whole. */
-export const updatePartSchema = z.looseObject({ version: z.number().int().positive() });
+/**
+ * Changed fields against a version; the service merges them into the current part and validates the whole.
+ * `stockOnHand` is dropped: stock changes only through stock adjustments, which keep its history.
+ */
+export const updatePartSchema = z
+  .looseObject({ version: z.number().int().positive() })
+  .transform(({ stockOnHand: _stockOnHand, ...changes }) => changes);
 export class UpdatePartDto extends zodDto(updatePartSchema) {}
 export type PartChanges = z.output<typeof updatePartSchema>;
 
