@@ -22,6 +22,17 @@ describe('part editor attribute values', () => {
     expect(checked.errors.maxPressurePsi).toBeUndefined();
   });
 
+  it('offers the optional rated pressure on a plug, as on an adapter', () => {
+    const connection = { 'connection.family': 'orb', 'connection.size': '-6', 'connection.gender': 'male' };
+    const unrated = checkAttributes('plug', { ...emptyAttributeValues('plug'), ...connection });
+    expect(unrated).toEqual({ ok: true, attributes: { connection: { family: 'orb', size: '-6', gender: 'male' } } });
+    const rated = checkAttributes('plug', { ...emptyAttributeValues('plug'), ...connection, maxPressurePsi: '3000' });
+    expect(rated.ok && (rated.attributes as { maxPressurePsi?: number }).maxPressurePsi).toBe(3000);
+    const zero = checkAttributes('plug', { ...emptyAttributeValues('plug'), ...connection, maxPressurePsi: '0' });
+    expect(zero.ok).toBe(false);
+    if (!zero.ok) expect(Object.keys(zero.errors)).toEqual(['maxPressurePsi']);
+  });
+
   it('passes on the schema message when a value is present but wrong', () => {
     const values = { ...emptyAttributeValues('clamp'), 'fitsOd.minIn': '0.9', 'fitsOd.maxIn': '0.5' };
     const checked = checkAttributes('clamp', values);

@@ -58,6 +58,7 @@ export const attributeFields: Record<PartKind, AttributeField[]> = {
   plug: [
     { type: 'connection', key: 'connection', label: 'Connection' },
     { type: 'seal', key: 'seal', label: 'Seal needed' },
+    { type: 'number', key: 'maxPressurePsi', label: 'Rated pressure', unit: 'psi', optional: true },
   ],
   clamp: odRange,
   sleeve: [...odRange, { type: 'number', key: 'maxTempF', label: 'Temperature rating', unit: '°F' }],
