@@ -1,5 +1,5 @@
 import type { Flag } from './flag.js';
-import { lineTarget, partName, type Rule } from './rule.js';
+import { jointTarget, partName, type Rule } from './rule.js';
 
 export const restrictionRule: Rule = {
   code: 'restriction',
@@ -11,22 +11,25 @@ export const restrictionRule: Rule = {
     const flags: Flag[] = [];
     const ratio = ctx.rules.restrictionRatio;
     for (const line of ctx.lines) {
-      if (!line.hose) continue;
-      const limit = ratio * line.hose.attributes.idIn;
-      const seen = new Set<string>();
-      for (const item of [...line.stacks.from.items, ...line.stacks.to.items]) {
-        const part = item.part;
-        if (!part || seen.has(part.id)) continue;
-        seen.add(part.id);
-        if (part.kind !== 'hose-end' && part.kind !== 'adapter' && part.kind !== 'bulkhead') continue;
-        if (part.attributes.boreIn >= limit) continue;
-        flags.push({
-          code: 'restriction',
-          severity: 'caution',
-          message: `${partName(part)} has a ${part.attributes.boreIn} in bore, under ${Math.round(ratio * 100)} % of the hose's ${line.hose.attributes.idIn} in inside diameter.`,
-          target: lineTarget(line.line.id),
-          fix: 'Choose a full-flow fitting or the next size up.',
-        });
+      const hose = line.hose;
+      if (!hose) continue;
+      const limit = ratio * hose.attributes.idIn;
+      // One flag per restricting part, pointing at its place in the end stack, so each gets its
+      // own acknowledgement (flagKey) and the sketch can show where it is.
+      for (const end of ['from', 'to'] as const) {
+        const items = line.stacks[end].items;
+        for (let index = 0; index < items.length; index++) {
+          const part = items[index].part;
+          if (!part || (part.kind !== 'hose-end' && part.kind !== 'adapter' && part.kind !== 'bulkhead')) continue;
+          if (part.attributes.boreIn >= limit) continue;
+          flags.push({
+            code: 'restriction',
+            severity: 'caution',
+            message: `${partName(part)} has a ${part.attributes.boreIn} in bore, under ${Math.round(ratio * 100)} % of the hose's ${hose.attributes.idIn} in inside diameter.`,
+            target: jointTarget(line.line.id, end, index),
+            fix: 'Choose a full-flow fitting or the next size up.',
+          });
+        }
       }
     }
     return flags;

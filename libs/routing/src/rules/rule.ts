@@ -42,8 +42,9 @@ export const jointTarget = (lineId: string, end: LineEnd, index: number): FlagTa
 
 export const portTarget = (unitId: string, portId: string): FlagTarget => ({ kind: 'port', id: portId, unitId });
 
-/** "Part ACME-1 (description)" for messages. */
-export const partName = (part: Part): string => `${part.description} [${part.id}]`;
+/** A part as shop users know it: its description and the supplier's part number, never a database id. */
+export const partName = (part: Part): string =>
+  part.supplierPartNumber ? `${part.description} (${part.supplierPartNumber})` : part.description;
 
 /** "from end" / "to end" of a line, with the port's label when there is one. */
 export function endName(line: LineAnalysis, end: LineEnd): string {
