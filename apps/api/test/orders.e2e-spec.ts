@@ -2,6 +2,7 @@ import ExcelJS from 'exceljs';
 import { AuditEventEntity } from '../src/audit/audit-event.entity.js';
 import { CircuitEntity } from '../src/circuits/circuit.entity.js';
 import { decodeQuotedPrintable, type FakeSmtp } from '../src/mail/fake-smtp-server.js';
+import { MailDeliveryError, MailService } from '../src/mail/mail.service.js';
 import { OutboxEntity } from '../src/mail/outbox.entity.js';
 import { OrderEntity } from '../src/orders/order.entity.js';
 import { PartEntity } from '../src/parts/part.entity.js';
@@ -210,15 +211,33 @@ describe('cut-list spreadsheets and orders (e2e)', () => {
       expect(cents(total.result)).toBe(order.totalCents);
     });
 
+    it('puts the order back to draft when the e-mail fails, and answers the error', async () => {
+      const order = orders.find((candidate) => candidate.supplierId !== null) as ApiOrder;
+      const failure = jest.spyOn(testApp.app.get(MailService), 'send').mockRejectedValueOnce(new MailDeliveryError());
+      try {
+        const failed = await testApp.http().post(`/api/orders/${order.id}/send`).set(as(clerkToken)).expect(503);
+        expect(failed.body.message).toMatch(/could not be sent/);
+      } finally {
+        failure.mockRestore();
+      }
+      const after = (await testApp.http().get(`/api/orders/${order.id}`).set(as(clerkToken)).expect(200)).body;
+      expect(after).toMatchObject({ status: 'draft', sentAt: null });
+      expect(await testApp.dataSource.getRepository(CircuitEntity).countBy({ id: circuitA.id, status: 'approved' })).toBe(1);
+    });
+
     it('e-mails the sheet to the supplier, marks the order sent and the circuits ordered', async () => {
       const order = orders.find((candidate) => candidate.supplierId !== null) as ApiOrder;
       const supplier = await testApp.dataSource.getRepository(SupplierEntity).findOneByOrFail({ id: order.supplierId as string });
       const shown = await testApp.http().get(`/api/orders/${order.id}`).set(as(clerkToken)).expect(200);
       expect(shown.body.supplier).toEqual({ id: supplier.id, name: supplier.name, email: supplier.email, accountNumber: supplier.accountNumber });
-      const sent = await testApp.http().post(`/api/orders/${order.id}/send`).set(as(clerkToken)).expect(200);
+      // Two sends at once (a double click, two clerks): the order is claimed once, so one e-mail goes out.
+      const attempts = await Promise.all([1, 2].map(() => testApp.http().post(`/api/orders/${order.id}/send`).set(as(clerkToken))));
+      expect(attempts.map((attempt) => attempt.status).sort()).toEqual([200, 409]);
+      const sent = attempts.find((attempt) => attempt.status === 200)!;
       expect(sent.body).toMatchObject({ status: 'sent', sentAt: expect.any(String) });
-      const mail = smtp.messages().find((message) => message.to.includes(supplier.email));
-      expect(mail).toBeDefined();
+      const mails = smtp.messages().filter((message) => message.to.includes(supplier.email));
+      expect(mails).toHaveLength(1);
+      const mail = mails[0];
       expect(decodeQuotedPrintable(mail?.raw ?? '')).toContain(supplier.accountNumber);
       const [attachment] = attachmentsOf(mail?.raw ?? '');
       expect(attachment).toMatchObject({ contentType: XLSX_CONTENT_TYPE, filename: expect.stringMatching(/^order-.*\.xlsx$/) });

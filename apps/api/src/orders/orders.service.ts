@@ -167,9 +167,10 @@ export class OrdersService {
   }
 
   /**
-   * E-mails the order sheet to the supplier, then marks the order sent and its circuits ordered
-   * (with an `order` event in each circuit's audit trail).
-   * If the mail fails nothing changes (the outbox records the attempt).
+   * Claims the order (draft → sent, guarded by its version, so of two concurrent sends only one
+   * e-mails), e-mails the order sheet to the supplier, then marks its circuits ordered (with an
+   * `order` event in each circuit's audit trail). If the mail fails the order goes back to draft
+   * and the error is answered (the outbox records the attempt).
    */
   async send(shopId: string, actorId: string, orderId: string): Promise<OrderDto> {
     const order = await this.get(shopId, orderId);
@@ -179,28 +180,31 @@ export class OrdersService {
       throw new ValidationError([{ path: 'supplierId', message: 'The supplier has no e-mail address. Add one, or export the sheet instead.' }]);
     }
     const [file, shop] = await Promise.all([this.exportSheet(shopId, orderId), this.shops.getOwnShop(shopId)]);
-    await this.mail.send({
-      shopId,
-      to: supplier.email,
-      subject: `Order from ${shop.name}${supplier.accountNumber ? ` (account ${supplier.accountNumber})` : ''}`,
-      text: [
-        `Hello ${supplier.name},`,
-        '',
-        `Please supply the parts on the attached order sheet (${order.lines.length} line(s)).`,
-        supplier.accountNumber ? `Our account number: ${supplier.accountNumber}.` : '',
-        '',
-        `Thank you,`,
-        shop.name,
-      ]
-        .filter((line, index, all) => line !== '' || all[index - 1] !== '')
-        .join('\n'),
-      attachments: [{ filename: file.fileName, content: file.body, contentType: XLSX_CONTENT_TYPE }],
-    });
+    const claimedVersion = await this.claimForSending(shopId, orderId, order.version);
+    try {
+      await this.mail.send({
+        shopId,
+        to: supplier.email,
+        subject: `Order from ${shop.name}${supplier.accountNumber ? ` (account ${supplier.accountNumber})` : ''}`,
+        text: [
+          `Hello ${supplier.name},`,
+          '',
+          `Please supply the parts on the attached order sheet (${order.lines.length} line(s)).`,
+          supplier.accountNumber ? `Our account number: ${supplier.accountNumber}.` : '',
+          '',
+          `Thank you,`,
+          shop.name,
+        ]
+          .filter((line, index, all) => line !== '' || all[index - 1] !== '')
+          .join('\n'),
+        attachments: [{ filename: file.fileName, content: file.body, contentType: XLSX_CONTENT_TYPE }],
+      });
+    } catch (error) {
+      // Not sent after all: the order is a draft again (only if nothing moved it since the claim).
+      await this.orders.update({ id: orderId, shopId, status: 'sent', version: claimedVersion }, { status: 'draft', sentAt: null });
+      throw error;
+    }
     await this.dataSource.transaction(async (manager) => {
-      const result = await manager
-        .getRepository(OrderEntity)
-        .update({ id: orderId, shopId, status: 'draft', version: order.version }, { status: 'sent', sentAt: new Date() });
-      if (!result.affected) throw new ConflictError('This order was changed by someone else.');
       const circuits = manager.getRepository(CircuitEntity);
       const stillApproved = await circuits.findBy({ shopId, id: In(order.circuitIds), status: 'approved' });
       if (!stillApproved.length) return;
@@ -217,6 +221,23 @@ export class OrdersService {
       }
     });
     return this.get(shopId, orderId);
+  }
+
+  /**
+   * Marks a draft order sent in one guarded UPDATE (status draft and the version read), so a
+   * second send of the same order finds nothing to claim and answers 409. Returns the new version.
+   */
+  private async claimForSending(shopId: string, orderId: string, version: number): Promise<number> {
+    const result = await this.orders
+      .createQueryBuilder()
+      .update(OrderEntity)
+      .set({ status: 'sent', sentAt: () => 'now()' })
+      .where('id = :orderId AND shop_id = :shopId AND status = :draft AND version = :version', { orderId, shopId, draft: 'draft', version })
+      .returning(['version'])
+      .execute();
+    const claimed = result.raw as Array<{ version: number }>;
+    if (!claimed.length) throw new ConflictError('This order is being sent or was changed by someone else.', { current: await this.get(shopId, orderId) });
+    return claimed[0]!.version;
   }
 
   /** Books delivered quantities into stock in one transaction; the order becomes partially or fully received. */
