@@ -1,6 +1,7 @@
-import { Button, Input, Label, TableCell, TableRow, Text, makeStyles, tokens, useId } from '@fluentui/react-components';
+import { Button, Input, Label, Select, TableCell, TableRow, Text, makeStyles, tokens, useId } from '@fluentui/react-components';
 import { ArrowResetRegular } from '@fluentui/react-icons';
 import type { ShopRuleField } from '../utils/shop-rule-fields';
+import { ruleValueText } from '../utils/rule-value-text';
 
 export interface ShopRuleRowProps {
   field: ShopRuleField;
@@ -53,18 +54,38 @@ export function ShopRuleRow({
       </TableCell>
       <TableCell>
         <span className={styles.value}>
-          <Input
-            id={inputId}
-            className={styles.input}
-            size="small"
-            value={value}
-            readOnly={readOnly}
-            inputMode="decimal"
-            contentAfter={<Text size={200}>{field.unit === 'in' ? 'in' : '%'}</Text>}
-            aria-invalid={error ? true : undefined}
-            aria-describedby={error ? `${errorId} ${helpId}` : helpId}
-            onChange={(_, data) => onChange(data.value)}
-          />
+          {field.choices ? (
+            <Select
+              id={inputId}
+              className={styles.input}
+              size="small"
+              value={value}
+              disabled={readOnly}
+              aria-invalid={error ? true : undefined}
+              aria-describedby={error ? `${errorId} ${helpId}` : helpId}
+              onChange={(_, data) => onChange(data.value)}
+            >
+              {/* Option values are the texts the form parses, so a choice saves like a typed value. */}
+              {field.choices.map((choice) => ruleValueText(choice, field.unit)).map((text) => (
+                <option key={text} value={text}>
+                  {text} {field.unit === 'in' ? 'in' : '%'}
+                </option>
+              ))}
+            </Select>
+          ) : (
+            <Input
+              id={inputId}
+              className={styles.input}
+              size="small"
+              value={value}
+              readOnly={readOnly}
+              inputMode="decimal"
+              contentAfter={<Text size={200}>{field.unit === 'in' ? 'in' : '%'}</Text>}
+              aria-invalid={error ? true : undefined}
+              aria-describedby={error ? `${errorId} ${helpId}` : helpId}
+              onChange={(_, data) => onChange(data.value)}
+            />
+          )}
           {error && (
             <Text id={errorId} size={200} className={styles.error}>
               {error}

@@ -99,9 +99,6 @@ describe('Admin › Shop rules', () => {
     const bore = screen.getByLabelText('Smallest bore');
     await user.clear(bore);
     await user.type(bore, '120');
-    const rounding = screen.getByLabelText('Round cut lengths up to');
-    await user.clear(rounding);
-    await user.type(rounding, '1 1/2');
     await user.click(screen.getByRole('button', { name: 'Save' }));
 
     expect(within(ruleRow('Support spacing')).getByText('Enter more than 0 in.')).toBeInTheDocument();
@@ -109,9 +106,34 @@ describe('Admin › Shop rules', () => {
       within(ruleRow('Fire sleeve overlap')).getByText('Enter a length in inches, for example 1 1/2, 1-1/2 or 1.5.'),
     ).toBeInTheDocument();
     expect(within(ruleRow('Smallest bore')).getByText('Enter at most 100 %.')).toBeInTheDocument();
-    expect(within(ruleRow('Round cut lengths up to')).getByText('Enter at most 1 in.')).toBeInTheDocument();
     expect(screen.getByLabelText('Support spacing')).toHaveAttribute('aria-invalid', 'true');
     expect(fetchMock.callsTo('PUT', '/api/shop-rules')).toHaveLength(0);
+  });
+
+  it('offers cut rounding only as the steps the routing library accepts, written as fractions', async () => {
+    const fetchMock = shopRulesApi().on('PUT', '/api/shop-rules', ({ body }) =>
+      jsonResponse(200, record((body as { rules: ShopRules }).rules, { version: 4 })),
+    );
+    await openShopRules(fetchMock);
+    const user = userEvent.setup();
+    const rounding = screen.getByRole('combobox', { name: 'Round cut lengths up to' });
+    // Common practice: a tape reads to 1/16 in; 1/16 = 0.0625, 1/8 = 0.125, 1/4 = 0.25, 1/2 = 0.5 in.
+    expect(within(rounding).getAllByRole('option').map((option) => option.textContent)).toEqual([
+      '1/16 in',
+      '1/8 in',
+      '1/4 in',
+      '1/2 in',
+    ]);
+
+    await user.selectOptions(rounding, '1/4 in');
+    await user.click(screen.getByRole('button', { name: 'Save' }));
+
+    expect(await screen.findByText(/Shop rules saved/)).toBeInTheDocument();
+    expect(fetchMock.callsTo('PUT', '/api/shop-rules')[0].body).toEqual({
+      version: 3,
+      rules: { ...defaultShopRules, cutRoundingIn: 0.25 },
+    });
+    expect(screen.getByLabelText('Round cut lengths up to')).toHaveValue('1/4');
   });
 
   it('resets a field to its default', async () => {

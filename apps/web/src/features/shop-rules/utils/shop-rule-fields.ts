@@ -1,4 +1,4 @@
-import type { ShopRules } from '@linesmith/routing';
+import { CUT_ROUNDING_STEPS_IN, type ShopRules } from '@linesmith/routing';
 
 /** How a rule is typed and shown: inches (fractions welcome), a percentage, or a ratio shown as a percentage. */
 export type ShopRuleUnit = 'in' | 'percent' | 'ratio';
@@ -24,6 +24,8 @@ export interface ShopRuleField {
   label: string;
   help: string;
   unit: ShopRuleUnit;
+  /** The only values the routing library accepts, offered as a choice instead of free text. */
+  choices?: readonly number[];
 }
 
 /** Every field of the shop rules form, in display order. */
@@ -99,6 +101,7 @@ export const shopRuleFields: readonly ShopRuleField[] = [
     label: 'Round cut lengths up to',
     help: 'Cut lengths are rounded up to a multiple of this.',
     unit: 'in',
+    choices: CUT_ROUNDING_STEPS_IN,
   },
   {
     id: 'trimAllowanceIn',
