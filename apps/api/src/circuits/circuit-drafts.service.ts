@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import type { CircuitDocument } from '@linesmith/routing';
-import type { DataSource, Repository } from 'typeorm';
+import type { DataSource, EntityManager, Repository } from 'typeorm';
 import { z } from 'zod';
 import { ConflictError, NotFoundError, ValidationError } from '../common/errors/app-error.js';
 import { UploadEntity } from '../uploads/upload.entity.js';
@@ -37,7 +37,6 @@ function returnedRows(result: unknown): Array<{ draft_version: number }> {
 export class CircuitDraftsService {
   constructor(
     @InjectRepository(CircuitEntity) private readonly circuits: Repository<CircuitEntity>,
-    @InjectRepository(UploadEntity) private readonly uploads: Repository<UploadEntity>,
     @InjectDataSource() private readonly dataSource: DataSource,
   ) {}
 
@@ -59,31 +58,48 @@ export class CircuitDraftsService {
     const document = parseClientDocument(raw);
     const circuit = await this.circuits.findOneBy({ id: circuitId, shopId });
     if (!circuit) throw new NotFoundError('The circuit');
-    await this.assertBackgroundBelongs(shopId, circuit.buildId, document);
 
     const { fluid, maxPressurePsi, maxTempF } = document.circuit;
-    const result: unknown = await this.dataSource.query(SAVE_DRAFT_SQL, [
-      JSON.stringify(document),
-      fluid,
-      maxPressurePsi,
-      maxTempF,
-      circuitId,
-      shopId,
-      expectedVersion,
-    ]);
-    const [saved] = returnedRows(result);
+    // The background photo stays share-locked until the draft naming it is written, so a photo
+    // delete (which locks it for update) either waits and then sees this draft, or wins and this
+    // save finds no photo.
+    const saved = await this.dataSource.transaction(async (tx) => {
+      await this.assertBackgroundBelongs(tx, shopId, circuit.buildId, document);
+      const result: unknown = await tx.query(SAVE_DRAFT_SQL, [
+        JSON.stringify(document),
+        fluid,
+        maxPressurePsi,
+        maxTempF,
+        circuitId,
+        shopId,
+        expectedVersion,
+      ]);
+      return returnedRows(result)[0];
+    });
     if (saved) return { draftVersion: saved.draft_version };
     throw new ConflictError('Someone saved this sketch after you opened it. Review their version before saving again.', {
       current: await this.get(shopId, circuitId),
     });
   }
 
-  /** A sketch background must be a photo of the same build. */
-  private async assertBackgroundBelongs(shopId: string, buildId: string, document: CircuitDocument): Promise<void> {
+  /** A sketch background must be a photo of the same build; it is share-locked in `tx` until the save commits. */
+  private async assertBackgroundBelongs(tx: EntityManager, shopId: string, buildId: string, document: CircuitDocument): Promise<void> {
     const uploadId = document.background?.uploadId;
     if (!uploadId) return;
     const found =
-      z.uuid().safeParse(uploadId).success && (await this.uploads.existsBy({ id: uploadId, shopId, buildId, kind: 'photo' }));
+      z.uuid().safeParse(uploadId).success &&
+      (await tx
+        .getRepository(UploadEntity)
+        .createQueryBuilder('upload')
+        .select('upload.id')
+        .where('upload.id = :uploadId AND upload.shop_id = :shopId AND upload.build_id = :buildId AND upload.kind = :kind', {
+          uploadId,
+          shopId,
+          buildId,
+          kind: 'photo',
+        })
+        .setLock('pessimistic_read')
+        .getOne()) !== null;
     if (!found) {
       throw new ValidationError([{ path: 'background.uploadId', message: 'The background must be a photo uploaded to this build.' }]);
     }

@@ -141,8 +141,20 @@ describe('CircuitsService', () => {
 describe('CircuitDraftsService.save', () => {
   let drafts: CircuitDraftsService;
   const circuits = { findOneBy: jest.fn(), createQueryBuilder: jest.fn() };
-  const uploads = { existsBy: jest.fn() };
-  const dataSource = { query: jest.fn() };
+  /** The photo lookup inside the save's transaction: its filter, its lock and its answer. */
+  const photoLookup = { where: jest.fn(), setLock: jest.fn(), getOne: jest.fn() };
+  const photoQuery = {
+    select: () => photoQuery,
+    where: (...args: unknown[]) => (photoLookup.where(...args), photoQuery),
+    setLock: (mode: string) => (photoLookup.setLock(mode), photoQuery),
+    getOne: () => photoLookup.getOne(),
+  };
+  const query = jest.fn();
+  const dataSource = {
+    query,
+    transaction: async (work: (tx: unknown) => Promise<unknown>): Promise<unknown> =>
+      work({ query, getRepository: (entity: unknown) => (entity === UploadEntity ? { createQueryBuilder: () => photoQuery } : undefined) }),
+  };
   const doc = emptyCircuitDocument({ fluid: 'atf', maxPressurePsi: 150, maxTempF: 250 });
 
   beforeEach(async () => {
@@ -151,7 +163,6 @@ describe('CircuitDraftsService.save', () => {
       providers: [
         CircuitDraftsService,
         { provide: getRepositoryToken(CircuitEntity), useValue: circuits },
-        { provide: getRepositoryToken(UploadEntity), useValue: uploads },
         { provide: getDataSourceToken(), useValue: dataSource },
       ],
     }).compile();
@@ -182,9 +193,17 @@ describe('CircuitDraftsService.save', () => {
   it('validates the document before touching the database, and checks the background photo', async () => {
     await expect(drafts.save(SHOP, CIRCUIT, 4, { ...doc, units: 'none' })).rejects.toBeInstanceOf(ValidationError);
     expect(dataSource.query).not.toHaveBeenCalled();
-    uploads.existsBy.mockResolvedValue(false);
+    photoLookup.getOne.mockResolvedValue(null);
     const withBackground = { ...doc, background: { uploadId: '44444444-4444-4444-8444-444444444444', opacity: 1, locked: false } };
     await expect(drafts.save(SHOP, CIRCUIT, 4, withBackground)).rejects.toMatchObject({ issues: [{ path: 'background.uploadId' }] });
-    expect(uploads.existsBy).toHaveBeenCalledWith({ id: withBackground.background.uploadId, shopId: SHOP, buildId: BUILD, kind: 'photo' });
+    expect(photoLookup.where).toHaveBeenCalledWith(expect.any(String), {
+      uploadId: withBackground.background.uploadId,
+      shopId: SHOP,
+      buildId: BUILD,
+      kind: 'photo',
+    });
+    // Share-locked until the draft is written, so a concurrent photo delete waits for this save.
+    expect(photoLookup.setLock).toHaveBeenCalledWith('pessimistic_read');
+    expect(dataSource.query).not.toHaveBeenCalled();
   });
 });

@@ -15,7 +15,20 @@ describe('UploadsService', () => {
   let service: UploadsService;
   const repo = { create: jest.fn(), save: jest.fn(), findOneBy: jest.fn(), delete: jest.fn(), find: jest.fn() };
   const storage = { put: jest.fn(), get: jest.fn(), delete: jest.fn() };
-  const dataSource = { query: jest.fn() };
+  const lockedRow = { setLock: jest.fn(), getOne: jest.fn() };
+  const rowQuery = {
+    select: () => rowQuery,
+    where: () => rowQuery,
+    setLock: (mode: string) => (lockedRow.setLock(mode), rowQuery),
+    getOne: () => lockedRow.getOne(),
+  };
+  const query = jest.fn();
+  const dataSource = {
+    query,
+    // The delete's transaction: its queries and repository calls reach the same mocks.
+    transaction: async (work: (tx: unknown) => Promise<unknown>): Promise<unknown> =>
+      work({ query, getRepository: () => ({ createQueryBuilder: () => rowQuery, delete: repo.delete }) }),
+  };
   const builds = { getOwn: jest.fn() };
 
   beforeEach(async () => {
@@ -63,6 +76,7 @@ describe('UploadsService', () => {
 
   it('will not delete a photo a circuit sketch uses; otherwise deletes the record, then the bytes', async () => {
     repo.findOneBy.mockResolvedValue(Object.assign(new UploadEntity(), { id: 'u1', shopId: SHOP, storageKey: `${SHOP}/k` }));
+    lockedRow.getOne.mockResolvedValue({ id: 'u1' });
     dataSource.query.mockResolvedValueOnce([{ name: 'Fuel' }]);
     await expect(service.remove(SHOP, 'u1')).rejects.toBeInstanceOf(ConflictError);
     expect(repo.delete).not.toHaveBeenCalled();
@@ -71,5 +85,7 @@ describe('UploadsService', () => {
     await service.remove(SHOP, 'u1');
     expect(repo.delete).toHaveBeenCalledWith({ id: 'u1', shopId: SHOP });
     expect(storage.delete).toHaveBeenCalledWith(`${SHOP}/k`);
+    // Checked and deleted under a row lock, so a draft save naming the photo cannot slip in between.
+    expect(lockedRow.setLock).toHaveBeenCalledWith('pessimistic_write');
   });
 });

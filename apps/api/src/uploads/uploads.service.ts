@@ -131,13 +131,25 @@ export class UploadsService {
   /** Refused while a circuit's sketch (its draft or a saved version) uses the photo as background. */
   async remove(shopId: string, uploadId: string): Promise<void> {
     const upload = await this.getOwn(shopId, uploadId);
-    const users: Array<{ name: string }> = await this.dataSource.query(CIRCUITS_USING_UPLOAD_SQL, [shopId, upload.id]);
-    if (users.length > 0) {
-      throw new ConflictError(
-        `This photo is the sketch background of ${users.map((row) => `"${row.name}"`).join(', ')}. Choose another background first.`,
-      );
-    }
-    await this.uploads.delete({ id: upload.id, shopId });
+    // One transaction holding the upload row for update: a draft save share-locks the photo it
+    // names, so it either commits first (and is seen here) or waits and then finds no photo.
+    await this.dataSource.transaction(async (tx) => {
+      const locked = await tx
+        .getRepository(UploadEntity)
+        .createQueryBuilder('upload')
+        .select('upload.id')
+        .where('upload.id = :uploadId AND upload.shop_id = :shopId', { uploadId: upload.id, shopId })
+        .setLock('pessimistic_write')
+        .getOne();
+      if (!locked) throw new NotFoundError('The file');
+      const users: Array<{ name: string }> = await tx.query(CIRCUITS_USING_UPLOAD_SQL, [shopId, upload.id]);
+      if (users.length > 0) {
+        throw new ConflictError(
+          `This photo is the sketch background of ${users.map((row) => `"${row.name}"`).join(', ')}. Choose another background first.`,
+        );
+      }
+      await tx.getRepository(UploadEntity).delete({ id: upload.id, shopId });
+    });
     // The record is gone first: a failed delete leaves unreachable bytes, never a record without bytes.
     await this.storage.delete(upload.storageKey).catch((error: unknown) => {
       this.logger.warn(`Could not delete stored bytes ${upload.storageKey}: ${String(error)}`);
