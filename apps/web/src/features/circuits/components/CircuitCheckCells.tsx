@@ -1,5 +1,5 @@
 import { Spinner, TableCell, Text } from '@fluentui/react-components';
-import { formatLength } from '@linesmith/routing';
+import { formatCutLength } from '@linesmith/routing';
 import { useUnitPreferences } from '../../preferences/hooks/useUnitPreferences';
 import { useCircuitCheck } from '../hooks/useCircuitCheck';
 import { cutListTotals } from '../utils/cut-list-totals';
@@ -46,7 +46,7 @@ export function CircuitCheckCells({ circuitId }: CircuitCheckCellsProps) {
       <TableCell>
         {totals.lines === 0
           ? 'No lines yet'
-          : `${totals.lines} ${totals.lines === 1 ? 'line' : 'lines'} · ${formatLength(totals.totalCutIn, units.length)} hose` +
+          : `${totals.lines} ${totals.lines === 1 ? 'line' : 'lines'} · ${formatCutLength(totals.totalCutIn, units.length)} hose` +
             (totals.cutLines < totals.lines ? ` (${totals.lines - totals.cutLines} not measured)` : '')}
       </TableCell>
       <TableCell>

@@ -6,7 +6,7 @@ import { useParts } from '../hooks/useParts';
 import { cutListTotals } from '../utils/cut-list-totals';
 import { countFlags } from '../utils/flag-counts';
 import { partDescriptions } from '../utils/part-descriptions';
-import { formatLength } from '@linesmith/routing';
+import { formatCutLength, formatLength } from '@linesmith/routing';
 import { BomTable } from './BomTable';
 import { CutListTable } from './CutListTable';
 import { FlagCountBadges } from './FlagCountBadges';
@@ -38,7 +38,7 @@ export function CircuitCheckView({ check, document, lengthUnit, headingLevel = '
       <div className={styles.summary}>
         <FlagCountBadges counts={countFlags(check.flags)} />
         <Text size={200}>
-          {totals.lines} {totals.lines === 1 ? 'line' : 'lines'} · {formatLength(totals.totalCutIn, lengthUnit)} of hose cut
+          {totals.lines} {totals.lines === 1 ? 'line' : 'lines'} · {formatCutLength(totals.totalCutIn, lengthUnit)} of hose cut
           {totals.cutLines < totals.lines ? ` (${totals.lines - totals.cutLines} not measured yet)` : ''} ·{' '}
           {totals.supports} supports · {formatLength(totals.sleeveIn, lengthUnit)} of sleeve
         </Text>

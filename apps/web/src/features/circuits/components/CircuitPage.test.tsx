@@ -69,7 +69,7 @@ describe('circuit page', () => {
   });
 
   // Expected figures worked by hand: 23.6875 in = 23 + 11/16 in; 1 in = 25.4 mm exactly (NIST SP 811,
-  // Appendix B), so 23.6875 in = 601.6625 mm → 602 mm and 17.3125 in = 17-5/16 in = 439.7375 mm → 440 mm.
+  // Appendix B), so 23.6875 in = 601.6625 mm → up to 602 mm and 17.3125 in = 17-5/16 in = 439.7375 mm → up to 440 mm.
   it('lists each line with its cut length in fractional inches and millimetres, hose dash and end stacks', async () => {
     renderApp({ path: '/circuits/c-1?tab=cut-list', user: demoUsers.fabricator, fetchMock: circuitApi([23.6875, 17.3125, null]) });
 
@@ -87,6 +87,21 @@ describe('circuit page', () => {
 
     expect(screen.getByText('1 caution')).toBeInTheDocument();
     expect(screen.getByRole('table', { name: 'Parts' })).toHaveTextContent('TW-E690');
+  });
+
+  // Common practice: cut long, never short. 23 in × 25.4 mm/in (NIST SP 811) = 584.2 mm → 585 mm, not 584;
+  // 20.53 in × 16 = 328.48 sixteenths → 329/16 = 20-9/16 in (not 20-1/2), 20.53 × 25.4 = 521.462 mm → 522 mm.
+  it('never shows a cut length shorter than the cut: inches up to the next 1/16, millimetres up to the next whole one', async () => {
+    renderApp({ path: '/circuits/c-1?tab=cut-list', user: demoUsers.fabricator, fetchMock: circuitApi([23, 20.53]) });
+
+    const [first, second] = await cutListRows();
+    const cells = (row: HTMLElement) => within(row).getAllByRole('cell').map((cell) => cell.textContent);
+    expect(cells(first)[3]).toMatch(/^23"/);
+    expect(cells(first)[4]).toBe('585 mm');
+    expect(cells(second)[3]).toMatch(/^20-9\/16"/);
+    expect(cells(second)[4]).toBe('522 mm');
+    // The total of the cuts rounds up as well: 23 + 20.53 = 43.53 in × 16 = 696.48 → 697/16 = 43-9/16 in.
+    expect(screen.getByText(/2 lines · 43-9\/16" of hose cut/)).toBeInTheDocument();
   });
 
   it('shows the other lengths in millimetres after the units toggle', async () => {

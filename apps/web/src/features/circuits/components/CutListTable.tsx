@@ -1,6 +1,6 @@
 import { Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, makeStyles, tokens } from '@fluentui/react-components';
 import type { Part } from '@linesmith/catalog';
-import { formatLength, type CircuitDocument, type LengthUnit } from '@linesmith/routing';
+import { formatCutLength, formatLength, type CircuitDocument, type LengthUnit } from '@linesmith/routing';
 import type { LineReportView } from '../api/check-schema';
 import { endStackParts, portName } from '../utils/end-stack-text';
 
@@ -67,7 +67,7 @@ export function CutListTable({ lines, document, descriptions, hoseParts, lengthU
                   'Not measured'
                 ) : (
                   <>
-                    {formatLength(cut, 'in')}
+                    {formatCutLength(cut, 'in')}
                     {report.toleranceIn !== null && (
                       <Text block size={100} className={styles.secondary}>
                         ± {formatLength(report.toleranceIn, 'in')}
@@ -76,7 +76,7 @@ export function CutListTable({ lines, document, descriptions, hoseParts, lengthU
                   </>
                 )}
               </TableCell>
-              <TableCell className={styles.number}>{cut === null ? '—' : formatLength(cut, 'mm')}</TableCell>
+              <TableCell className={styles.number}>{cut === null ? '—' : formatCutLength(cut, 'mm')}</TableCell>
               <TableCell>
                 <EndStack ids={line?.endStacks.from ?? []} descriptions={descriptions} className={styles.stack} />
               </TableCell>

@@ -16,7 +16,7 @@ const after: CircuitDocument = {
 describe('revision comparison', () => {
   it('lists a re-routed line with its old and new cut length in fractional inches', async () => {
     const before = { document: reviewDocument, evaluation: evaluationWith([], 20.5) };
-    const next = { document: after, evaluation: evaluationWith([], 22.375) };
+    const next = { document: after, evaluation: evaluationWith([], 22.34) };
     const comparison = compareDocuments(before.document, next.document, before.evaluation, next.evaluation);
     const fetchMock = createFetchMock()
       .on('GET', '/api/circuits/c-1', () => jsonResponse(200, apiCircuit('c-1')))
@@ -27,7 +27,8 @@ describe('revision comparison', () => {
     renderApp({ path: '/circuits/c-1/compare?from=1&to=2', user: demoUsers.reviewer, fetchMock });
 
     const lines = await screen.findByRole('region', { name: 'Lines' });
-    // 20.5 in = 20-1/2 in and 22.375 in = 22-3/8 in (worked by hand: 0.5 = 8/16, 0.375 = 6/16 = 3/8).
+    // 20.5 in = 20-1/2 in (0.5 = 8/16); 22.34 in × 16 = 357.44 sixteenths → up to 358/16 = 22-3/8 in, not the
+    // nearest 22-5/16 (common practice: cut long, never short).
     expect(within(lines).getByText(/Re-routed: Line 1 \(Transmission · cooler out → Cooler · inlet\) — cut length 20-1\/2" → 22-3\/8"/)).toBeInTheDocument();
     expect(screen.getByRole('img', { name: /Revision 1: 2 units, 1 lines.*1 items highlighted/ })).toBeInTheDocument();
     expect(screen.getByRole('img', { name: /Revision 2: 2 units, 1 lines.*1 items highlighted/ })).toBeInTheDocument();

@@ -1,5 +1,5 @@
 import { Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow } from '@fluentui/react-components';
-import { formatLength, type CircuitDocument, type CircuitEvaluation } from '@linesmith/routing';
+import { formatCutLength, formatLength, type CircuitDocument, type CircuitEvaluation } from '@linesmith/routing';
 import { lineName } from '../utils/flag-place';
 import { partNames } from '../utils/part-names';
 
@@ -30,7 +30,7 @@ export function CutListSummary({ document, evaluation }: CutListSummaryProps) {
             <TableCell>
               {report.cutLengthIn === null
                 ? 'Not worked out'
-                : `${formatLength(report.cutLengthIn, 'in')} (${formatLength(report.cutLengthIn, 'mm')})`}
+                : `${formatCutLength(report.cutLengthIn, 'in')} (${formatCutLength(report.cutLengthIn, 'mm')})`}
             </TableCell>
             <TableCell>{report.supports.atIn.length}</TableCell>
             <TableCell>{report.sleeves.plannedLengthIn > 0 ? formatLength(report.sleeves.plannedLengthIn, 'in') : '—'}</TableCell>

@@ -1,4 +1,4 @@
-import { formatInches, type CircuitDocument } from '@linesmith/routing';
+import { formatCutLength, type CircuitDocument } from '@linesmith/routing';
 import type { ComparisonResult } from '../api/comparison-schema';
 import { lineName } from './flag-place';
 import { partNames } from './part-names';
@@ -17,7 +17,7 @@ const settingLabels: Readonly<Record<string, string>> = {
 };
 const slotLabels = { hose: 'hose', 'end-from': 'end stack at the start', 'end-to': 'end stack at the end' } as const;
 
-const cut = (valueIn: number | null | undefined) => (valueIn === null || valueIn === undefined ? 'not worked out' : `${formatInches(valueIn)}"`);
+const cut = (valueIn: number | null | undefined) => (valueIn === null || valueIn === undefined ? 'not worked out' : formatCutLength(valueIn, 'in'));
 
 function unitName(doc: CircuitDocument, id: string): string {
   const unit = doc.units.find((u) => u.id === id);

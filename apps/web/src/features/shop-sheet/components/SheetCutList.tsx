@@ -1,6 +1,6 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
 import type { Part } from '@linesmith/catalog';
-import { formatLength, type CircuitDocument, type CircuitEvaluation } from '@linesmith/routing';
+import { formatCutLength, formatLength, type CircuitDocument, type CircuitEvaluation } from '@linesmith/routing';
 import { endStackParts, portName } from '../../circuits/utils/end-stack-text';
 import { partNames } from '../../reviews/utils/part-names';
 
@@ -70,8 +70,8 @@ export function SheetCutList({ document, evaluation, parts }: SheetCutListProps)
                 {hoseText}
                 {dash}
               </td>
-              <td className={`${c} ${styles.number}`}>{cut === null ? 'Not worked out' : formatLength(cut, 'in')}</td>
-              <td className={`${c} ${styles.number}`}>{cut === null ? '—' : formatLength(cut, 'mm')}</td>
+              <td className={`${c} ${styles.number}`}>{cut === null ? 'Not worked out' : formatCutLength(cut, 'in')}</td>
+              <td className={`${c} ${styles.number}`}>{cut === null ? '—' : formatCutLength(cut, 'mm')}</td>
               {(['from', 'to'] as const).map((end) => (
                 <td key={end} className={c}>
                   {line && line.endStacks[end].length > 0 ? (

@@ -16,7 +16,7 @@ function sheetApi(audit: unknown[]) {
     .on('GET', '/api/circuits/c-1', () => jsonResponse(200, apiCircuit('c-1', { status: 'approved' })))
     .on('GET', '/api/builds/b-1', () => jsonResponse(200, apiBuild('b-1')))
     .on('GET', '/api/circuits/c-1/revisions/2', () => jsonResponse(200, revision))
-    .on('POST', '/api/rules/evaluate', () => jsonResponse(200, evaluationWith([], 23.6875)))
+    .on('POST', '/api/rules/evaluate', () => jsonResponse(200, evaluationWith([], 23)))
     .on('GET', '/api/circuits/c-1/audit', () => jsonResponse(200, audit));
 }
 
@@ -41,9 +41,9 @@ describe('shop sheet', () => {
     expect(signOff).toHaveTextContent('Hollis Brandt');
     expect(screen.queryByText(/NOT APPROVED/)).not.toBeInTheDocument();
     const row = within(screen.getByRole('table', { name: 'Cut list' })).getAllByRole('row')[1];
-    // 23.6875 in = 23-11/16 in; × 25.4 mm/in (exact, NIST SP 811 App. B) = 601.66 mm → 602 mm.
-    expect(row).toHaveTextContent('23-11/16"');
-    expect(row).toHaveTextContent('602 mm');
+    // 23 in × 25.4 mm/in (exact, NIST SP 811 App. B) = 584.2 mm → up to 585 mm, not 584 (common practice: cut long, never short).
+    expect(row).toHaveTextContent('23"');
+    expect(row).toHaveTextContent('585 mm');
     expect(screen.getByRole('button', { name: 'Print' })).toBeInTheDocument();
   });
 

@@ -1,6 +1,6 @@
 import { FluentProvider, webLightTheme } from '@fluentui/react-components';
 import { demoParts } from '@linesmith/catalog';
-import { defaultShopRules, evaluateCircuit, formatLength } from '@linesmith/routing';
+import { defaultShopRules, evaluateCircuit, formatCutLength } from '@linesmith/routing';
 import { render, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it } from 'vitest';
@@ -45,6 +45,6 @@ describe('SketchEditor', () => {
     const expected = evaluateCircuit(coolerSketch(), demoParts, defaultShopRules).lines[0].cutLengthIn!;
     const table = await screen.findByRole('table', { name: /cut length/i });
     const row = within(table).getByRole('row', { name: /cut length \(rounded up\)/i });
-    expect(row).toHaveTextContent(formatLength(expected, 'in'));
+    expect(row).toHaveTextContent(formatCutLength(expected, 'in'));
   });
 });

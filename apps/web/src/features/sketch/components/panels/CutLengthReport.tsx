@@ -1,5 +1,5 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
-import { formatLength, type LengthUnit, type LineReport } from '@linesmith/routing';
+import { formatCutLength, formatLength, inToMm, type LengthUnit, type LineReport } from '@linesmith/routing';
 
 const useStyles = makeStyles({
   table: { borderCollapse: 'collapse', width: '100%', fontSize: tokens.fontSizeBase200 },
@@ -25,8 +25,9 @@ export function CutLengthReport({ report, unit }: CutLengthReportProps) {
     ['− End stack at from-port', len(report.endStackFromIn)],
     ['− End stack at to-port', len(report.endStackToIn)],
     [`+ Slack${report.crossesMounts ? ' (crosses mount groups)' : ''}`, len(report.slackIn)],
-    ['= Exact cut', report.exactCutIn === null ? '—' : unit === 'mm' ? formatLength(report.exactCutIn, unit) : `${report.exactCutIn.toFixed(3)} in`],
-    ['Cut length (rounded up)', len(report.cutLengthIn), true],
+    // The exact cut unrounded (whole mm would hide up to half a millimetre); the next row is what to cut.
+    ['= Exact cut', report.exactCutIn === null ? '—' : unit === 'mm' ? `${inToMm(report.exactCutIn).toFixed(1)} mm` : `${report.exactCutIn.toFixed(3)} in`],
+    ['Cut length (rounded up)', report.cutLengthIn === null ? '—' : formatCutLength(report.cutLengthIn, unit), true],
     ['Tolerance (RMA IP-2 Table 4-8)', report.toleranceIn === null ? '—' : `± ${len(report.toleranceIn)}`],
   ];
   return (

@@ -1,5 +1,5 @@
 import { demoParts } from '@linesmith/catalog';
-import { centrelineLength, defaultShopRules, evaluateCircuit, formatLength } from '@linesmith/routing';
+import { centrelineLength, defaultShopRules, evaluateCircuit } from '@linesmith/routing';
 import { describe, expect, it } from 'vitest';
 import { coolerSketch } from '../../test-support/sketch-fixtures';
 import { cutLengthLabel } from '../../utils/cut-length-label';
@@ -74,11 +74,15 @@ describe('cut length shown on a line', () => {
   it('is the routing lib’s cut length, and matches a hand-worked example', () => {
     const doc = calibrate(straightLine(), { a: { x: 0, y: 0 }, b: { x: 200, y: 0 }, knownIn: 10 });
     const report = evaluateCircuit(doc, demoParts, defaultShopRules).lines[0];
-    expect(cutLengthLabel(report, 'in')).toBe(`Cut ${formatLength(report.cutLengthIn!, 'in')}`);
     // By hand (DOMAIN §4): 25 in − (0.95 + 0.8) − (1.05 + 0.8) + slack max(1-1/2, 4 % × 25) = 22.9 → up to the next 1/8: 23 in.
     expect(report.cutLengthIn).toBeCloseTo(23, 9);
     expect(cutLengthLabel(report, 'in')).toBe('Cut 23"');
-    expect(cutLengthLabel(report, 'mm')).toBe('Cut 584 mm'); // 23 × 25.4 = 584.2
+    // 23 in × 25.4 mm/in (NIST SP 811) = 584.2 mm → up to 585 mm (common practice: cut long, never short).
+    expect(cutLengthLabel(report, 'mm')).toBe('Cut 585 mm');
+    // A cut off the 1/16 in grid rounds up too: 20.53 in × 16 = 328.48 → 329/16 = 20-9/16 in (nearest would be 20-1/2);
+    // 20.53 × 25.4 = 521.462 mm → 522 mm (nearest would be 521).
+    expect(cutLengthLabel({ ...report, cutLengthIn: 20.53 }, 'in')).toBe('Cut 20-9/16"');
+    expect(cutLengthLabel({ ...report, cutLengthIn: 20.53 }, 'mm')).toBe('Cut 522 mm');
     expect(cutLengthLabel(evaluateCircuit({ ...doc, calibration: null }, demoParts, defaultShopRules).lines[0], 'in')).toMatch(/needs scale/);
   });
 });
