@@ -97,10 +97,10 @@ describe('cut-list spreadsheets and orders (e2e)', () => {
       expect(header).toEqual(expect.arrayContaining(['Cut length (mm)', 'Cut length (in, fraction)', 'Sleeve length (in)']));
       const line = sheet.getRow(headerRow + 1);
       // Worked by hand (DOMAIN §4, as in the rules e2e): 30 − (0.95 + 0.80) − (1.05 + 0.80) + 1.5 slack
-      // = 27.90 in → next 1/8 in = 28 in; 28 × 25.4 mm/in (exact by definition) = 711.2 → 711 mm.
+      // = 27.90 in → next 1/8 in = 28 in; 28 × 25.4 mm/in (exact by definition) = 711.2 → cut long: 712 mm.
       expect(line.getCell(col('Cut length (in)')).value).toBe(28);
-      expect(line.getCell(col('Cut length (in, fraction)')).value).toBe('28');
-      expect(line.getCell(col('Cut length (mm)')).value).toBe(711);
+      expect(line.getCell(col('Cut length (in, fraction)')).value).toBe('28"');
+      expect(line.getCell(col('Cut length (mm)')).value).toBe(712);
       expect(line.getCell(col('Dash size')).value).toBe('-6');
       expect(line.getCell(col('Supports (count)')).value).toBe(2);
       expect(sheet.getColumn(col('Line')).width).toBeGreaterThan(10);

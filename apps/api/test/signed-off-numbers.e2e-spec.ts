@@ -1,4 +1,5 @@
 import { CircuitRevisionEntity } from '../src/circuits/circuit-revision.entity.js';
+import { PartEntity } from '../src/parts/part.entity.js';
 import { coolerLineDocument } from './support/approved-circuit.js';
 import { createBuild, createCircuit } from './support/builds.js';
 import { seedCatalogueInto } from './support/demo-catalogue.js';
@@ -7,7 +8,7 @@ import { startTestApp, type TestApp } from './support/test-app.js';
 import { downloadWorkbook, rowWith } from './support/xlsx.js';
 
 interface DraftOrdersResponse {
-  coveredByStock: Array<{ partId: string; needed: number }>;
+  orders: Array<{ lines: Array<{ partId: string; quantity: number }> }>;
 }
 
 /** Once signed off, a revision's cut list and order quantities no longer follow later rule or catalogue edits. */
@@ -37,16 +38,18 @@ describe('signed-off numbers stay as approved (e2e)', () => {
     return sheet.getRow(headerRow + 1).getCell(column).value;
   }
 
-  /** Feet of hose the order draft needs (the demo shelf holds enough, so it is reported as covered by stock). */
-  async function hoseFeetNeeded(): Promise<number | undefined> {
+  /** Whole feet of hose on the order draft (the shelf is emptied first, so nothing is taken off). */
+  async function orderedHoseFeet(): Promise<number | undefined> {
     const response = await testApp.http().post('/api/orders/draft').set(as(clerk)).send({ circuitIds: [circuitId] }).expect(201);
-    return (response.body as DraftOrdersResponse).coveredByStock.find((row) => row.partId === id('demo-hose-6-rubber'))?.needed;
+    return (response.body as DraftOrdersResponse).orders.flatMap((order) => order.lines).find((line) => line.partId === id('demo-hose-6-rubber'))
+      ?.quantity;
   }
 
   beforeAll(async () => {
     testApp = await startTestApp();
     shop = await createTestShop(testApp, 'signed-off');
     ids = await seedCatalogueInto(testApp, shop.shop);
+    await testApp.dataSource.getRepository(PartEntity).update({ id: id('demo-hose-6-rubber') }, { stockOnHand: 0 });
     [fab, lead, admin, clerk] = await Promise.all([token(['fabricator']), token(['reviewer']), token(['admin']), token(['parts-clerk'])]);
     const buildId = (await createBuild(testApp, fab, { vehicle: { make: 'Redfern', model: 'Pickup' } })).id;
     const circuit = await createCircuit(testApp, fab, buildId, { name: 'Cooler signed off', kind: 'transmission-cooler' });
@@ -86,8 +89,8 @@ describe('signed-off numbers stay as approved (e2e)', () => {
 
   it('keeps the approved cut list and order quantities after the shop raises its slack; the draft follows the new rules', async () => {
     expect(await cutLengthIn('')).toBe(28);
-    // (28 in cut + 1/2 in trim, common practice) / 12 in/ft = 2.375 ft.
-    expect(await hoseFeetNeeded()).toBeCloseTo(2.375, 9);
+    // (28 in cut + 1/2 in trim, common practice) / 12 in/ft = 2.375 ft → 3 whole feet.
+    expect(await orderedHoseFeet()).toBe(3);
 
     await testApp.http().put('/api/shop-rules').set(as(admin)).send({ version: 0, rules: { slackMinIn: 10 } }).expect(200);
 
@@ -95,7 +98,7 @@ describe('signed-off numbers stay as approved (e2e)', () => {
     expect(await cutLengthIn('?draft=1')).toBe(36.5);
     expect(await cutLengthIn('')).toBe(28);
     expect(await cutLengthIn('?revision=1')).toBe(28);
-    // Not (36.5 + 0.5) / 12 = 3.083 ft: the order works from the signed-off bill of materials.
-    expect(await hoseFeetNeeded()).toBeCloseTo(2.375, 9);
+    // Not (36.5 + 0.5) / 12 = 3.083 ft → 4 ft: the order works from the signed-off bill of materials.
+    expect(await orderedHoseFeet()).toBe(3);
   });
 });

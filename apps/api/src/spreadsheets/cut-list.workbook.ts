@@ -1,5 +1,5 @@
 import type { Part } from '@linesmith/catalog';
-import { formatInches, inToMm, type CircuitDocument, type CircuitEvaluation } from '@linesmith/routing';
+import { formatCutLength, formatInches, type CircuitDocument, type CircuitEvaluation } from '@linesmith/routing';
 import type ExcelJS from 'exceljs';
 import {
   addTableSheet,
@@ -71,8 +71,9 @@ function addCutListSheet(workbook: ExcelJS.Workbook, source: CutListSource): voi
       hose: hose?.description ?? (report.hosePartId ? `unknown part ${report.hosePartId}` : 'no hose picked'),
       dash: hose?.kind === 'hose' ? `-${hose.attributes.dash}` : '',
       cutIn: cut ?? null,
-      cutFraction: cut === null ? '' : formatInches(cut),
-      cutMm: cut === null ? null : Math.round(inToMm(cut)),
+      // Both rounded up by the routing library's one cut-length rule (cut long, never short).
+      cutFraction: cut === null ? '' : formatCutLength(cut, 'in'),
+      cutMm: cut === null ? null : Number.parseInt(formatCutLength(cut, 'mm'), 10),
       fromStack: stackText(line.endStacks.from, parts),
       toStack: stackText(line.endStacks.to, parts),
       supports: report.supports.atIn.length,
