@@ -74,7 +74,8 @@ describe('reviewer: acknowledge and approve, or return with comments', () => {
     await lead.getByLabel('Safety').waitFor();
     await screenshot(lead, 'review-3-shop-sheet');
     await lead.emulateMedia({ media: 'print' });
-    expect(await lead.getByRole('navigation', { name: 'Sections' }).isVisible()).toBe(false);
+    // Print media drops the app's navigation from the sheet (PrintStyles); wait for the restyle.
+    await lead.getByRole('navigation', { name: 'Sections', includeHidden: true }).waitFor({ state: 'hidden', timeout: 5_000 });
     await screenshot(lead, 'review-4-shop-sheet-print');
     await lead.emulateMedia({ media: 'screen' });
   });
