@@ -29,12 +29,12 @@ describe('parts clerk: catalogue and order sheet', () => {
     await page.getByRole('navigation', { name: 'Sections' }).getByRole('link', { name: 'Catalogue', exact: true }).click();
     const table = page.getByRole('table', { name: 'Parts' });
     await table.waitFor();
+    // Listen before choosing: the filtered list may arrive before a later listener is in place.
+    const filtered = page.waitForResponse((r) => r.url().includes('/api/parts?') && r.url().includes('kind=hose'));
     await page.getByRole('combobox', { name: 'Kind' }).selectOption('hose');
-    await page.waitForResponse((r) => r.url().includes('/api/parts?') && r.url().includes('kind=hose'));
-    await page.waitForTimeout(300);
-    const kinds = await table.locator('tbody tr td:nth-child(2)').allTextContents();
-    expect(kinds.length).toBeGreaterThan(0);
-    expect(new Set(kinds)).toEqual(new Set(['Hose']));
+    await filtered;
+    const kinds = () => table.locator('tbody tr td:nth-child(2)').allTextContents();
+    await expect.poll(async () => [...new Set(await kinds())]).toEqual(['Hose']);
     await screenshot(page, 'catalogue-hoses');
     await page.getByRole('tab', { name: 'Suppliers' }).click();
     await page.getByRole('table', { name: 'Suppliers' }).waitFor();

@@ -1,5 +1,5 @@
 import type { BrowserContext, Locator, Page } from 'playwright-core';
-import { evaluateCircuit, formatLength, type CircuitDocument } from '@linesmith/routing';
+import { evaluateCircuit, formatCutLength, type CircuitDocument } from '@linesmith/routing';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { api, apiSignIn, catalogue, copyOfDemoCircuit, runTag, shopRules, type ApiSession, type CircuitRef } from './api-setup';
 import { baseUrl, demoUsers, openBrowser, screenshot, signIn } from './browser';
@@ -105,7 +105,7 @@ describe('fabricator: sketching a transmission-cooler circuit', () => {
     ]);
     expect(document.lines).toHaveLength(1);
     const [report] = evaluateCircuit(document, parts, rules).lines;
-    expect(formatLength(report.cutLengthIn!, 'in')).toBe(cutText);
+    expect(formatCutLength(report.cutLengthIn!, 'in')).toBe(cutText);
     // Drawn length, by hand: clicked points land within a pixel of their aim; the polyline port → corners →
     // port (Euclidean distances) over the saved scale is about 496 px at 20 px per inch = 24.8 in.
     const line = document.lines[0];
@@ -133,11 +133,12 @@ describe('fabricator: sketching a transmission-cooler circuit', () => {
     expect(report.cutLengthIn!).toBeGreaterThanOrEqual(report.exactCutIn!);
     expect(report.cutLengthIn! - report.exactCutIn!).toBeLessThan(0.125);
 
-    // Units: in millimetres the same cut reads 25.4 mm to the inch (exact by definition since 1959).
+    // Units: in millimetres the same cut reads 25.4 mm to the inch (exact by definition since 1959),
+    // rounded UP to the whole millimetre (common practice: cut long, never short).
     // (A click on a radio item closes the menu; Escape would reach the sketch and clear the selection.)
     await page.getByRole('button', { name: /^Units:/ }).click();
     await page.getByRole('menuitemradio', { name: 'Millimetres' }).click();
-    await expect.poll(async () => (await cutRow().textContent()) ?? '').toContain(`${Math.round(report.cutLengthIn! * 25.4)} mm`);
+    await expect.poll(async () => (await cutRow().textContent()) ?? '').toContain(`${Math.ceil(report.cutLengthIn! * 25.4 - 1e-9)} mm`);
     await screenshot(page, 'sketch-3-millimetres');
     await page.getByRole('button', { name: /^Units:/ }).click();
     await page.getByRole('menuitemradio', { name: 'Inches (fractions)' }).click();

@@ -1,5 +1,5 @@
 import type { Flag } from './flag.js';
-import { jointTarget, partName, type Rule } from './rule.js';
+import { endName, jointTarget, partName, type Rule } from './rule.js';
 
 export const restrictionRule: Rule = {
   code: 'restriction',
@@ -25,7 +25,7 @@ export const restrictionRule: Rule = {
           flags.push({
             code: 'restriction',
             severity: 'caution',
-            message: `${partName(part)} has a ${part.attributes.boreIn} in bore, under ${Math.round(ratio * 100)} % of the hose's ${hose.attributes.idIn} in inside diameter.`,
+            message: `At ${endName(line, end)}, ${partName(part)} has a ${part.attributes.boreIn} in bore, under ${Math.round(ratio * 100)} % of the hose's ${hose.attributes.idIn} in inside diameter.`,
             target: jointTarget(line.line.id, end, index),
             fix: 'Choose a full-flow fitting or the next size up.',
           });
