@@ -11,7 +11,7 @@ import { useShopSheetData } from '../hooks/useShopSheetData';
 import { assemblyNotesFor } from '../utils/assembly-notes';
 import { familiesPresent } from '../utils/families-present';
 import { AssemblyNotes } from './AssemblyNotes';
-import { PrintStyles } from './PrintStyles';
+import './shop-sheet-print.css';
 import { SheetCutList } from './SheetCutList';
 import { SignOffBlock } from './SignOffBlock';
 
@@ -49,7 +49,6 @@ export function ShopSheetPage() {
   const vehicle = build.data ? vehicleTitle(build.data.vehicle) : '';
   return (
     <article className={styles.sheet} aria-labelledby="sheet-title" data-shop-sheet>
-      <PrintStyles />
       <div className={styles.toolbar} data-print-hide>
         <Button appearance="primary" icon={<PrintRegular />} onClick={() => window.print()}>
           Print
