@@ -1,7 +1,7 @@
 import { demoParts, demoSuppliers, partSchema } from '@linesmith/catalog';
 import { PartEntity } from '../src/parts/part.entity.js';
-import { seedCatalogueInto } from './support/demo-catalogue.js';
-import { createTestShop, removeShops, signIn, type TestShop } from './support/fixtures.js';
+import { demoIdLookup, seedCatalogueInto } from './support/demo-catalogue.js';
+import { bearer, createTestShop, removeShops, tokenFor, type TestShop } from './support/fixtures.js';
 import { startTestApp, type TestApp } from './support/test-app.js';
 
 interface ApiPart {
@@ -30,9 +30,9 @@ describe('parts and suppliers (e2e)', () => {
     shopA = await createTestShop(testApp, 'parts-a');
     shopB = await createTestShop(testApp, 'parts-b');
     ids = await seedCatalogueInto(testApp, shopA.shop);
-    fabToken = (await signIn(testApp, (await shopA.addUser(['fabricator'])).email)).accessToken;
-    clerkToken = (await signIn(testApp, (await shopA.addUser(['parts-clerk'])).email)).accessToken;
-    otherShopToken = (await signIn(testApp, (await shopB.addUser(['admin', 'parts-clerk'])).email)).accessToken;
+    fabToken = await tokenFor(testApp, shopA, ['fabricator']);
+    clerkToken = await tokenFor(testApp, shopA, ['parts-clerk']);
+    otherShopToken = await tokenFor(testApp, shopB, ['admin', 'parts-clerk']);
   });
 
   afterAll(async () => {
@@ -40,12 +40,8 @@ describe('parts and suppliers (e2e)', () => {
     await testApp.close();
   });
 
-  const as = (token: string) => ({ Authorization: `Bearer ${token}` });
-  const id = (demoId: string) => {
-    const found = ids.get(demoId);
-    if (!found) throw new Error(`${demoId} was not seeded`);
-    return found;
-  };
+  const as = bearer;
+  const id = demoIdLookup(() => ids);
   const listAs = async (token: string, query: string) =>
     (await testApp.http().get(`/api/parts?${query}`).set(as(token)).expect(200)).body as { items: ApiPart[]; total: number };
   const idsOf = (items: ApiPart[]) => items.map((part) => part.id).sort();

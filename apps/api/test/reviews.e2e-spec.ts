@@ -1,7 +1,8 @@
 import type { CircuitDocumentInput } from '@linesmith/routing';
 import { createBuild, createCircuit } from './support/builds.js';
-import { seedCatalogueInto } from './support/demo-catalogue.js';
-import { createTestShop, removeShops, signIn, type TestShop } from './support/fixtures.js';
+import { coolerLineDocument } from './support/approved-circuit.js';
+import { demoIdLookup, seedCatalogueInto } from './support/demo-catalogue.js';
+import { bearer, createTestShop, removeShops, signIn, type TestShop } from './support/fixtures.js';
 import { startTestApp, type TestApp } from './support/test-app.js';
 
 interface Caller {
@@ -46,12 +47,8 @@ describe('reviews: submit, acknowledge, approve or return, audit trail, comparis
     await testApp.close();
   });
 
-  const as = (caller: Caller) => ({ Authorization: `Bearer ${caller.token}` });
-  const id = (demoId: string) => {
-    const found = ids.get(demoId);
-    if (!found) throw new Error(`${demoId} was not seeded`);
-    return found;
-  };
+  const as = (caller: Caller) => bearer(caller.token);
+  const id = demoIdLookup(() => ids);
 
   /**
    * A -6 cooler line, 30 in straight at 10 px/in, from a -6 O-ring boss port (powertrain) to a
@@ -60,46 +57,7 @@ describe('reviews: submit, acknowledge, approve or return, audit trail, comparis
    * inverted-flare adapter's 0.3 in bore is under 80 % of the hose's 0.375 in bore (`restriction`).
    */
   const coolerLine = (edit?: (doc: CircuitDocumentInput) => void): CircuitDocumentInput => {
-    const doc: CircuitDocumentInput = {
-      schema: 'linesmith.circuit/1',
-      circuit: { fluid: 'atf', maxPressurePsi: 150, maxTempF: 250 },
-      calibration: { a: { x: 0, y: 0 }, b: { x: 100, y: 0 }, knownIn: 10 },
-      background: null,
-      units: [
-        {
-          id: 'trans',
-          kind: 'transmission',
-          label: 'Transmission',
-          x: 0,
-          y: 0,
-          mountGroup: 'powertrain',
-          ports: [{ id: 'out', label: 'cooler out', connection: { family: 'orb', size: '-6', gender: 'female' }, role: 'out', dx: 0, dy: 0 }],
-        },
-        {
-          id: 'cooler',
-          kind: 'cooler',
-          label: 'Cooler',
-          x: 300,
-          y: 0,
-          mountGroup: 'chassis',
-          ports: [{ id: 'in', label: 'in', connection: { family: 'invflare45', size: '3/8', gender: 'female' }, role: 'feed', dx: 0, dy: 0 }],
-        },
-      ],
-      lines: [
-        {
-          id: 'L1',
-          from: { unitId: 'trans', portId: 'out' },
-          to: { unitId: 'cooler', portId: 'in' },
-          hosePartId: id('demo-hose-6-rubber'),
-          points: [],
-          endStacks: {
-            from: [id('demo-adapter-orb6-f37-6'), id('demo-hose-end-6-rubber-0')],
-            to: [id('demo-adapter-invf6-f37-6'), id('demo-hose-end-6-rubber-0')],
-          },
-        },
-      ],
-      heatZones: [],
-    };
+    const doc = coolerLineDocument(id);
     edit?.(doc);
     return doc;
   };

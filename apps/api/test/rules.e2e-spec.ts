@@ -1,7 +1,8 @@
 import { partSchema } from '@linesmith/catalog';
-import { circuitDocumentSchema, defaultShopRules, evaluateCircuit, shopRulesSchema, type CircuitDocumentInput } from '@linesmith/routing';
-import { seedCatalogueInto } from './support/demo-catalogue.js';
-import { createTestShop, removeShops, signIn, type TestShop } from './support/fixtures.js';
+import { circuitDocumentSchema, defaultShopRules, evaluateCircuit, shopRulesSchema } from '@linesmith/routing';
+import { coolerLineDocument } from './support/approved-circuit.js';
+import { demoIdLookup, seedCatalogueInto } from './support/demo-catalogue.js';
+import { bearer, createTestShop, removeShops, tokenFor, type TestShop } from './support/fixtures.js';
 import { startTestApp, type TestApp } from './support/test-app.js';
 
 describe('shop rules and rules evaluation (e2e)', () => {
@@ -18,9 +19,9 @@ describe('shop rules and rules evaluation (e2e)', () => {
     shop = await createTestShop(testApp, 'rules');
     rulesShop = await createTestShop(testApp, 'shop-rules');
     ids = await seedCatalogueInto(testApp, shop.shop);
-    fabToken = (await signIn(testApp, (await shop.addUser(['fabricator'])).email)).accessToken;
-    adminToken = (await signIn(testApp, (await rulesShop.addUser(['admin'])).email)).accessToken;
-    rulesFabToken = (await signIn(testApp, (await rulesShop.addUser(['fabricator', 'parts-clerk'])).email)).accessToken;
+    fabToken = await tokenFor(testApp, shop, ['fabricator']);
+    adminToken = await tokenFor(testApp, rulesShop, ['admin']);
+    rulesFabToken = await tokenFor(testApp, rulesShop, ['fabricator', 'parts-clerk']);
   });
 
   afterAll(async () => {
@@ -28,12 +29,8 @@ describe('shop rules and rules evaluation (e2e)', () => {
     await testApp.close();
   });
 
-  const as = (token: string) => ({ Authorization: `Bearer ${token}` });
-  const id = (demoId: string) => {
-    const found = ids.get(demoId);
-    if (!found) throw new Error(`${demoId} was not seeded`);
-    return found;
-  };
+  const as = bearer;
+  const id = demoIdLookup(() => ids);
 
   describe('shop rules', () => {
     it('answers the defaults with their origins until the admin saves', async () => {
@@ -83,50 +80,8 @@ describe('shop rules and rules evaluation (e2e)', () => {
   });
 
   describe('POST /api/rules/evaluate', () => {
-    /**
-     * A -6 cooler line, 30 in straight at 10 px/in, from a -6 O-ring boss port on the transmission
-     * (powertrain) to a 3/8 in inverted-flare port on the cooler (chassis), no supports.
-     */
-    const coolerLine = (): CircuitDocumentInput => ({
-      schema: 'linesmith.circuit/1',
-      circuit: { fluid: 'atf', maxPressurePsi: 150, maxTempF: 250 },
-      calibration: { a: { x: 0, y: 0 }, b: { x: 100, y: 0 }, knownIn: 10 },
-      background: null,
-      units: [
-        {
-          id: 'trans',
-          kind: 'transmission',
-          label: 'Transmission',
-          x: 0,
-          y: 0,
-          mountGroup: 'powertrain',
-          ports: [{ id: 'out', label: 'cooler out', connection: { family: 'orb', size: '-6', gender: 'female' }, role: 'out', dx: 0, dy: 0 }],
-        },
-        {
-          id: 'cooler',
-          kind: 'cooler',
-          label: 'Cooler',
-          x: 300,
-          y: 0,
-          mountGroup: 'chassis',
-          ports: [{ id: 'in', label: 'in', connection: { family: 'invflare45', size: '3/8', gender: 'female' }, role: 'feed', dx: 0, dy: 0 }],
-        },
-      ],
-      lines: [
-        {
-          id: 'L1',
-          from: { unitId: 'trans', portId: 'out' },
-          to: { unitId: 'cooler', portId: 'in' },
-          hosePartId: id('demo-hose-6-rubber'),
-          points: [],
-          endStacks: {
-            from: [id('demo-adapter-orb6-f37-6'), id('demo-hose-end-6-rubber-0')],
-            to: [id('demo-adapter-invf6-f37-6'), id('demo-hose-end-6-rubber-0')],
-          },
-        },
-      ],
-      heatZones: [],
-    });
+    /** The shared -6 cooler line (support/approved-circuit.ts), no supports. */
+    const coolerLine = () => coolerLineDocument(id);
 
     const evaluate = (doc: object) => testApp.http().post('/api/rules/evaluate').set(as(fabToken)).send(doc);
 

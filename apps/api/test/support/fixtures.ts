@@ -53,3 +53,11 @@ export function refreshCookieOf(headers: Record<string, unknown>): string {
   if (!cookie) throw new Error('no ls_refresh cookie in the response');
   return cookie.split(';')[0];
 }
+
+/** Adds a user with `roles` to `target` and signs them in; answers the access token. */
+export async function tokenFor(testApp: TestApp, target: TestShop, roles: Role[], label?: string): Promise<string> {
+  return (await signIn(testApp, (await target.addUser(roles, label)).email)).accessToken;
+}
+
+/** The Authorization header of a bearer token. */
+export const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
