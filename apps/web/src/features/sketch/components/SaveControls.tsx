@@ -23,14 +23,19 @@ export interface SaveControlsProps {
   canEdit: boolean;
 }
 
-const useStyles = makeStyles({ row: { display: 'inline-flex', alignItems: 'center', gap: tokens.spacingHorizontalS } });
+const useStyles = makeStyles({
+  row: { display: 'inline-flex', alignItems: 'center', gap: tokens.spacingHorizontalS },
+  badge: { minWidth: '84px', justifyContent: 'flex-start' },
+});
 
 const statusText = (s: SaveStatus): { text: string; color: 'success' | 'informative' | 'warning' | 'danger' } => {
   switch (s.state) {
     case 'saved':
       return { text: '✓ Saved', color: 'success' };
     case 'unsaved':
-      return { text: '● Unsaved changes', color: 'informative' };
+      // Kept as short as "✓ Saved" and "↻ Saving…": a wider badge wraps the toolbar at laptop
+      // widths and every edit would then resize the canvas.
+      return { text: '● Unsaved', color: 'informative' };
     case 'saving':
       return { text: '↻ Saving…', color: 'informative' };
     case 'offline':
@@ -70,7 +75,7 @@ export function SaveControls({ autosave, onSaveVersion, canEdit }: SaveControlsP
 
   return (
     <span className={styles.row}>
-      <Badge appearance="tint" color={badge.color} role="status" aria-label="Save state">
+      <Badge appearance="tint" color={badge.color} role="status" aria-label="Save state" className={styles.badge}>
         {badge.text}
       </Badge>
       {result && <Text size={200}>{result}</Text>}
