@@ -36,4 +36,21 @@ describe('ZodValidationPipe', () => {
     expect(pipe.transform(value, { type: 'body', metatype: Object })).toBe(value);
     expect(pipe.transform('abc', { type: 'param', metatype: String })).toBe('abc');
   });
+
+  it('refuses NUL characters in any body or query, naming the path (PostgreSQL cannot store them)', () => {
+    const body = { units: [{ ports: [{ label: 'ok' }, { label: 'bad\u0000label' }] }] };
+    try {
+      pipe.transform(body, { type: 'body', metatype: Object });
+      throw new Error('expected a validation error');
+    } catch (error) {
+      expect(error).toBeInstanceOf(ValidationError);
+      expect((error as ValidationError).issues).toEqual([{ path: 'units.0.ports.1.label', message: 'Text must not contain NUL characters' }]);
+    }
+    expect(() => pipe.transform({ search: 'a\u0000' }, { type: 'query', metatype: Object })).toThrow(ValidationError);
+    expect(pipe.transform({ search: 'plain' }, { type: 'query', metatype: Object })).toEqual({ search: 'plain' });
+    // Deeper than the call stack would allow: walked without recursion.
+    let deep: unknown = 'x\u0000';
+    for (let i = 0; i < 100_000; i++) deep = { d: deep };
+    expect(() => pipe.transform(deep, { type: 'body', metatype: Object })).toThrow(ValidationError);
+  });
 });
