@@ -52,6 +52,12 @@ export const hoseAttributesSchema = z.object({
   maxPressurePsi: positive,
   maxTempF: z.number(),
   minBendRadiusIn: positive,
+  /**
+   * Which radius the maker's minimum is quoted to. Hose makers quote it to the inside of the bend
+   * (SAE J517 and makers' data: "measured to the innermost surface"); some quote the centreline.
+   * Absent means inside.
+   */
+  minBendRadiusMeasuredTo: z.enum(['inside', 'centreline']).optional(),
   fluids: z.array(fluidSchema).min(1),
 });
 
@@ -61,6 +67,10 @@ export const hoseEndAttributesSchema = z.object({
   port: connectionSpecSchema,
   angle,
   allowanceIn: z.number().nonnegative(), // seal point to hose cut face
+  /** Seal point to where the hose leaves the socket: the hose cannot bend inside it. Absent: the allowance is used. */
+  rigidLengthIn: z.number().nonnegative().optional(),
+  /** How far a male port-side thread reaches into a port past its face. */
+  reachIn: z.number().nonnegative().optional(),
   boreIn: positive,
   maxPressurePsi: positive,
 });
@@ -70,6 +80,8 @@ export const adapterAttributesSchema = z.object({
   b: connectionSpecSchema,
   angle,
   bodyLengthIn: z.number().nonnegative(),
+  /** How far the male side that goes into a port (side a) reaches past the port face. */
+  reachIn: z.number().nonnegative().optional(),
   boreIn: positive,
   features: z.array(z.string().min(1)).default([]),
   seal: sealNeedSchema.optional(),
@@ -78,6 +90,8 @@ export const adapterAttributesSchema = z.object({
 
 export const plugAttributesSchema = z.object({
   connection: connectionSpecSchema,
+  /** How far the plug reaches past the port face. */
+  reachIn: z.number().nonnegative().optional(),
   seal: sealNeedSchema.optional(),
   maxPressurePsi: positive.optional(),
 });
