@@ -23,22 +23,26 @@ describe('evaluateCircuit: cut list', () => {
     expect(line.endStackToIn).toBe(0.75);
     expect(line.crossesMounts).toBe(true);
     expect(line.slackIn).toBe(1.5); // 4 % of 19.14 in is under the 1-1/2 in minimum
+    expect(line.slackRule).toBe('cross-mount-minimum');
     expect(line.exactCutIn).toBeCloseTo(19.1416 - 2 + 1.5, 4);
     expect(line.cutLengthIn).toBe(18.75);
     expect(line.toleranceIn).toBe(3 / 16); // 12–24 in band, RMA IP-2 Table 4-8
     expect(line.fits).toBe(true);
   });
 
-  it('a measured length overrides the drawn one; no slack between parts on the same mount', () => {
+  it('a measured length overrides the drawn one; a line on one mount still gets 4 % slack (FAA AC 43.13-1B, ch. 9)', () => {
     const line = evaluate((d) => {
       d.units[1].mountGroup = 'powertrain';
       d.lines[0].measuredLengthIn = 41;
     }).lines[0];
     expect(line.basis).toBe('measured');
     expect(line.centrelineIn).toBe(30);
-    expect(line.slackIn).toBe(0);
-    expect(line.exactCutIn).toBe(41 - 2);
-    expect(line.cutLengthIn).toBe(39);
+    expect(line.crossesMounts).toBe(false);
+    // 4 % × 41 in = 1.64 in, more than the 1/2 in same-mount minimum (common practice).
+    expect(line.slackIn).toBeCloseTo(1.64, 12);
+    expect(line.slackRule).toBe('percent');
+    expect(line.exactCutIn).toBeCloseTo(41 - 2 + 1.64, 12);
+    expect(line.cutLengthIn).toBe(40.75); // 40.64 rounded up to the next 1/8 in
   });
 
   it('plans sleeves from the heat zone’s clearance plus the shop overlap, clamped to the line', () => {

@@ -40,16 +40,25 @@ describe('cut length', () => {
   });
 });
 
-describe('slack across mounts', () => {
+describe('slack on every line', () => {
   it('4 % of the length matches the −4 % a hose may shorten under pressure (FAA AC 43.13-1B, ch. 9)', () => {
     expect(defaultShopRules.slackPercent).toBe(4);
     const length = 60;
-    expect(requiredSlack(length, defaultShopRules)).toBeCloseTo(length * 0.04, 12); // 2.4 in > the 1.5 in minimum
+    const across = requiredSlack(length, defaultShopRules, true);
+    expect(across.requiredIn).toBeCloseTo(length * 0.04, 12); // 2.4 in > the 1-1/2 in minimum
+    expect(across.rule).toBe('percent');
+    // The same 4 % on one mount: the pressure shortening does not care where the ports ride.
+    expect(requiredSlack(length, defaultShopRules, false)).toEqual(across);
   });
 
-  it('the shop minimum (1-1/2 in, common practice) governs short lines', () => {
-    expect(requiredSlack(20, defaultShopRules)).toBe(1.5);
-    expect(requiredSlack(37.5, defaultShopRules)).toBeCloseTo(1.5, 12); // where the two meet
+  it('the mount case’s minimum governs short lines (1-1/2 in across mounts, 1/2 in on one mount — common practice)', () => {
+    expect(requiredSlack(20, defaultShopRules, true)).toEqual({ requiredIn: 1.5, rule: 'cross-mount-minimum' });
+    expect(requiredSlack(10, defaultShopRules, false)).toEqual({ requiredIn: 0.5, rule: 'same-mount-minimum' });
+    // Where the two terms meet: 37.5 in × 4 % = 1.5 in; 12.5 in × 4 % = 0.5 in (the minimum is named on a tie).
+    expect(requiredSlack(37.5, defaultShopRules, true).requiredIn).toBeCloseTo(1.5, 12);
+    expect(requiredSlack(12.5, defaultShopRules, false).rule).toBe('same-mount-minimum');
+    // Past it the percentage wins on one mount: 30 in × 4 % = 1.2 in > 1/2 in.
+    expect(requiredSlack(30, defaultShopRules, false)).toEqual({ requiredIn: 1.2, rule: 'percent' });
   });
 });
 

@@ -26,12 +26,31 @@ export function roundCutUp(exactIn: number, stepIn: number): number {
   return (Math.abs(steps - nearest) < 1e-9 ? nearest : Math.ceil(steps)) * stepIn;
 }
 
+/** Which term set a line's slack: the fabricator's override, the shop's percentage of the length, or the shop's minimum for its mount case. */
+export type SlackRule = 'override' | 'percent' | 'same-mount-minimum' | 'cross-mount-minimum';
+
+export interface SlackNeed {
+  /** max(shop minimum for the mount case, shop % × length). */
+  requiredIn: number;
+  /** The term that gave `requiredIn`: the percentage, or the minimum for the mount case (the minimum on a tie). */
+  rule: Exclude<SlackRule, 'override'>;
+}
+
 /**
- * Slack a line needs when its two ports ride on different mounts: max(shop minimum, shop % × length).
- * The 4 % default is the shortening a hose may show under pressure (FAA AC 43.13-1B, ch. 9).
+ * Slack every line needs: max(shop minimum for its mount case, shop % × length). Hose may shorten
+ * by up to 4 % under pressure (FAA AC 43.13-1B, ch. 9) on every line; where the two ports ride on
+ * different mount groups the shop's larger cross-mount minimum applies (common practice).
  */
-export function requiredSlack(lengthIn: number, rules: Pick<ShopRules, 'slackMinIn' | 'slackPercent'>): number {
-  return Math.max(rules.slackMinIn, (rules.slackPercent / 100) * lengthIn);
+export function requiredSlack(
+  lengthIn: number,
+  rules: Pick<ShopRules, 'slackMinIn' | 'slackMinSameMountIn' | 'slackPercent'>,
+  crossesMounts: boolean,
+): SlackNeed {
+  const minimum = crossesMounts ? rules.slackMinIn : rules.slackMinSameMountIn;
+  const share = (rules.slackPercent / 100) * Math.max(0, lengthIn);
+  return share > minimum
+    ? { requiredIn: share, rule: 'percent' }
+    : { requiredIn: minimum, rule: crossesMounts ? 'cross-mount-minimum' : 'same-mount-minimum' };
 }
 
 export interface CutLengthInput {

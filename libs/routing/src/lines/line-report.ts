@@ -1,4 +1,5 @@
 import type { Interval } from '../geometry/intervals.js';
+import type { SlackRule } from './cut-length.js';
 import type { Span } from './supports.js';
 
 /** Why a placed sleeve gives no heat cover: no part picked, unknown part, a part that is not a sleeve, a sleeve for another hose OD, or no hose to fit it on. */
@@ -30,7 +31,12 @@ export interface LineReport {
   endStackToIn: number;
   /** True when the two ports ride on different mount groups. */
   crossesMounts: boolean;
+  /** Slack in the cut length: the override when set, else `requiredSlackIn`. */
   slackIn: number;
+  /** max(shop minimum for the mount case, shop % × length); 0 when no length is known. */
+  requiredSlackIn: number;
+  /** Which term set `slackIn` (shown on the cut list); null when no length is known. */
+  slackRule: SlackRule | null;
   exactCutIn: number | null;
   cutLengthIn: number | null;
   /** ± band of RMA IP-2 Table 4-8 for this cut length. */
