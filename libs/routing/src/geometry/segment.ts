@@ -65,19 +65,20 @@ export function segmentWithinCapsule(a: Vec, b: Vec, e: Vec, f: Vec, radius: num
 
 /**
  * segmentWithinCapsule on flat arrays: `chord` is [ax, ay, bx, by], `capsule` is [ex, ey, fx, fy,
- * radius]; the interval goes into `out` (true when there is one). The heat check runs this on
- * thousands of chords per evaluation: numbers passed one by one would be boxed on every call.
+ * radius] from index `at` (a zone keeps all its edges' capsules in one array); the interval goes
+ * into `out` (true when there is one). The heat check runs this on thousands of chords per
+ * evaluation: numbers passed one by one would be boxed on every call.
  */
-export function chordWithinCapsule(chord: Float64Array, capsule: Float64Array, out: Float64Array): boolean {
+export function chordWithinCapsule(chord: Float64Array, capsule: Float64Array, out: Float64Array, at = 0): boolean {
   const ax = chord[0];
   const ay = chord[1];
   const dx = chord[2] - ax;
   const dy = chord[3] - ay;
-  const ex = capsule[0];
-  const ey = capsule[1];
-  const fx = capsule[2];
-  const fy = capsule[3];
-  const radius = capsule[4];
+  const ex = capsule[at];
+  const ey = capsule[at + 1];
+  const fx = capsule[at + 2];
+  const fy = capsule[at + 3];
+  const radius = capsule[at + 4];
   let lo = Infinity;
   let hi = -Infinity;
   // The two end discs: |a + t·d − centre|² ≤ r², a quadratic in t.

@@ -1,13 +1,12 @@
 import type { HosePart, Part } from '@linesmith/catalog';
 import { fitsOd } from '@linesmith/catalog';
 import type { CircuitLine } from '../circuit/document.schema.js';
-import { centrelineDetail, type CentrelineDetail } from '../geometry/centreline.js';
+import type { CentrelineDetail } from '../geometry/centreline.js';
+import { fillPackedRoutePath, packCentreline, type PackedCentreline } from '../geometry/centreline-packed.js';
 import { subtractIntervals, totalLength, type Interval } from '../geometry/intervals.js';
-import { fillRoutePath, type RoutePath } from '../geometry/route-path.js';
-import { pointIn, pointPxToIn, type PointIn } from '../geometry/units.js';
-import { distance } from '../geometry/vec.js';
+import type { RoutePath } from '../geometry/route-path.js';
 import type { ShopRules } from '../rules/shop-rules.js';
-import { cutLength, cutLengthTolerance, requiredSlack, type SlackRule } from './cut-length.js';
+import { cutLength, cutLengthTolerance, requiredSlack } from './cut-length.js';
 import { resolveEndStack, type Mater, type ResolvedStack } from './end-stack.js';
 import { heatExposure, type HeatExposure, type prepareZones } from './heat.js';
 import type { LineReport, PlacedSleeve, SleeveProblem } from './line-report.js';
@@ -45,6 +44,10 @@ const STRETCH_NOISE = 1e-12;
 
 /** Each line's route path, overwritten by the next line: only the heat check and the stretch read it. */
 const SCRATCH_PATH: RoutePath = { xs: [], ys: [], s: [], count: 0, lengthIn: 0 };
+/** Each line's route in inches (ports and corners), overwritten by the next line. */
+let routeXs: Float64Array = new Float64Array(256);
+let routeYs: Float64Array = new Float64Array(256);
+let routeRadii: Float64Array = new Float64Array(256);
 
 export const portKey = (unitId: string, portId: string): string => `${unitId}/${portId}`;
 
@@ -63,21 +66,36 @@ export function analyseLine(line: CircuitLine, env: LineEnvironment): LineAnalys
   };
 
   let centreline: CentrelineDetail | null = null;
+  let packed: PackedCentreline | null = null;
   let drawnLengthIn: number | null = null;
   if (env.pxPerIn !== null && from && to) {
     const perIn = env.pxPerIn;
-    // Plain loops: this runs for every line of every evaluation.
-    const routeIn: PointIn[] = [pointPxToIn(from.positionPx, perIn)];
-    const radii: number[] = [0];
-    for (const p of line.points) {
-      routeIn.push(pointIn(p.x / perIn, p.y / perIn));
-      radii.push(p.bendRadiusIn);
+    // The route in inches goes into flat scratch arrays: this runs for every line of every evaluation.
+    const n = line.points.length + 2;
+    if (routeXs.length < n) {
+      routeXs = new Float64Array(2 * n);
+      routeYs = new Float64Array(2 * n);
+      routeRadii = new Float64Array(2 * n);
     }
-    routeIn.push(pointPxToIn(to.positionPx, perIn));
-    radii.push(0);
-    centreline = centrelineDetail(routeIn, radii);
+    routeXs[0] = from.positionPx.x / perIn;
+    routeYs[0] = from.positionPx.y / perIn;
+    routeRadii[0] = 0;
+    for (let i = 0; i < line.points.length; i++) {
+      const p = line.points[i];
+      routeXs[i + 1] = p.x / perIn;
+      routeYs[i + 1] = p.y / perIn;
+      routeRadii[i + 1] = p.bendRadiusIn;
+    }
+    routeXs[n - 1] = to.positionPx.x / perIn;
+    routeYs[n - 1] = to.positionPx.y / perIn;
+    routeRadii[n - 1] = 0;
+    centreline = packed = packCentreline(routeXs, routeYs, routeRadii, n);
     let drawn = 0;
-    for (let i = 1; i < routeIn.length; i++) drawn += distance(routeIn[i - 1], routeIn[i]);
+    for (let i = 1; i < n; i++) {
+      const dx = routeXs[i - 1] - routeXs[i];
+      const dy = routeYs[i - 1] - routeYs[i];
+      drawn += Math.sqrt(dx * dx + dy * dy);
+    }
     drawnLengthIn = drawn;
   }
   const measuredLengthIn = line.measuredLengthIn ?? null;
@@ -86,12 +104,8 @@ export function analyseLine(line: CircuitLine, env: LineEnvironment): LineAnalys
   const basis = measuredLengthIn !== null ? 'measured' : centrelineIn !== null ? 'drawn' : null;
 
   const crossesMounts = !!from && !!to && from.unit.mountGroup !== to.unit.mountGroup;
-  // Every line gets slack (hose shortens under pressure on any mount): max(minimum for the mount case, % × length).
-  const need = basisIn === null ? null : requiredSlack(basisIn, rules, crossesMounts);
-  const requiredSlackIn = need?.requiredIn ?? 0;
-  const override = line.slackOverrideIn ?? null;
-  const slackIn = override ?? requiredSlackIn;
-  const slackRule: SlackRule | null = override !== null ? 'override' : (need?.rule ?? null);
+  const requiredSlackIn = crossesMounts && basisIn !== null ? requiredSlack(basisIn, rules) : 0;
+  const slackIn = line.slackOverrideIn ?? requiredSlackIn;
 
   let exactCutIn: number | null = null;
   let cutLengthIn: number | null = null;
@@ -108,7 +122,7 @@ export function analyseLine(line: CircuitLine, env: LineEnvironment): LineAnalys
   }
 
   // Positions along the line are in the basis length; a measured line stretches the drawn one evenly.
-  const path = centreline ? fillRoutePath(centreline, SCRATCH_PATH) : null;
+  const path = packed ? fillPackedRoutePath(packed, SCRATCH_PATH) : null;
   const rawHeat = path ? heatExposure(path, env.zones, rules.sleeveOverlapIn) : null;
   const stretch = path && basisIn !== null && path.lengthIn > 0 ? basisIn / path.lengthIn : 1;
   // A drawn basis equals the path length up to rounding: only a real stretch is worth new intervals.
@@ -143,8 +157,6 @@ export function analyseLine(line: CircuitLine, env: LineEnvironment): LineAnalys
     endStackToIn: stacks.to.lengthIn,
     crossesMounts,
     slackIn,
-    requiredSlackIn,
-    slackRule,
     exactCutIn,
     cutLengthIn,
     toleranceIn: cutLengthIn === null ? null : cutLengthTolerance(cutLengthIn),
