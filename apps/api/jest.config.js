@@ -18,7 +18,8 @@ const shared = {
   // The workspace libs resolve to their TypeScript sources under this condition.
   testEnvironmentOptions: { customExportConditions: ['@linesmith/source', 'node', 'node-addons'] },
   transform: { '^.+\\.(t|j)s$': swcTransform },
-  transformIgnorePatterns: ['/node_modules/(?!(@nestjs|@linesmith)/)'],
+  // flatbush (the routing library's spatial index) is ESM-only, like @nestjs.
+  transformIgnorePatterns: ['/node_modules/(?!(@nestjs|@linesmith|flatbush|flatqueue)/)'],
   moduleNameMapper: { '^(\\.{1,2}/.*)\\.js$': '$1' },
   moduleFileExtensions: ['ts', 'js', 'json'],
 };
