@@ -5,7 +5,7 @@ import type { CentrelineDetail } from '../geometry/centreline.js';
 import { fillPackedRoutePath, packCentreline, type PackedCentreline } from '../geometry/centreline-packed.js';
 import { subtractIntervals, totalLength, type Interval } from '../geometry/intervals.js';
 import type { RoutePath } from '../geometry/route-path.js';
-import type { ShopRules } from '../rules/shop-rules.js';
+import { supportSpacingFor, type ShopRules } from '../rules/shop-rules.js';
 import { cutLength, cutLengthTolerance, requiredSlack } from './cut-length.js';
 import { resolveEndStack, type Mater, type ResolvedStack } from './end-stack.js';
 import { heatExposure, type HeatExposure, type prepareZones } from './heat.js';
@@ -165,7 +165,7 @@ export function analyseLine(line: CircuitLine, env: LineEnvironment): LineAnalys
       atIn: supportsAt,
       spans,
       longestSpanIn: spans.reduce((m, s) => Math.max(m, s.lengthIn), 0),
-      proposedAtIn: basisIn === null ? [] : proposeSupports(basisIn, rules.supportSpacingIn),
+      proposedAtIn: basisIn === null ? [] : proposeSupports(basisIn, supportSpacingFor(hose?.attributes.dash, rules)),
     },
     sleeves: {
       requiredIn,

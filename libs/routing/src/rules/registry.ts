@@ -1,4 +1,7 @@
+import { bendNearSocketRule } from './bend-near-socket.rule.js';
 import { bendRadiusRule } from './bend-radius.rule.js';
+import { freeHoseLengthRule } from './free-hose-length.rule.js';
+import { measuredLengthRule } from './measured-length.rule.js';
 import { fluidRule } from './fluid.rule.js';
 import { heatContactRule } from './heat-contact.rule.js';
 import { heatSleeveRule } from './heat-sleeve.rule.js';
@@ -19,7 +22,7 @@ import type { Rule } from './rule.js';
 import { scaleMissingRule } from './scale-missing.rule.js';
 import { supportGapRule } from './support-gap.rule.js';
 
-/** Every rule the engine runs, in the order of DOMAIN §5 (plus missing-part). */
+/** Every rule the engine runs, in the order of DOMAIN §5 (plus missing-part), the hose-behaviour checks beside bend-radius. */
 export const ruleRegistry: readonly Rule[] = [
   jointSeatRule,
   jointThreadRule,
@@ -30,6 +33,9 @@ export const ruleRegistry: readonly Rule[] = [
   ratingTemperatureRule,
   fluidRule,
   bendRadiusRule,
+  bendNearSocketRule,
+  freeHoseLengthRule,
+  measuredLengthRule,
   heatContactRule,
   heatSleeveRule,
   supportGapRule,

@@ -1,3 +1,4 @@
+import { isBelow } from './compare.js';
 import type { Flag } from './flag.js';
 import { endName, jointTarget, partName, type Rule } from './rule.js';
 
@@ -21,11 +22,11 @@ export const restrictionRule: Rule = {
         for (let index = 0; index < items.length; index++) {
           const part = items[index].part;
           if (!part || (part.kind !== 'hose-end' && part.kind !== 'adapter' && part.kind !== 'bulkhead')) continue;
-          if (part.attributes.boreIn >= limit) continue;
+          if (!isBelow(part.attributes.boreIn, limit)) continue; // 0.8 × 0.375 in is 0.300…04: a 0.300 in bore meets it
           flags.push({
             code: 'restriction',
             severity: 'caution',
-            message: `At ${endName(line, end)}, ${partName(part)} has a ${part.attributes.boreIn} in bore, under ${Math.round(ratio * 100)} % of the hose's ${hose.attributes.idIn} in inside diameter.`,
+            message: `At ${endName(line, end)}, ${partName(part)} has a ${part.attributes.boreIn} in bore, under ${Math.round(ratio * 1000) / 10} % of the hose's ${hose.attributes.idIn} in inside diameter (${Number(limit.toFixed(4))} in).`,
             target: jointTarget(line.line.id, end, index),
             fix: 'Choose a full-flow fitting or the next size up.',
           });

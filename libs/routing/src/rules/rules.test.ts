@@ -102,9 +102,27 @@ const cases: Case[] = [
   },
   {
     code: 'bend-radius',
-    source: 'hose minimum bend radius 2 in',
-    raises: (d) => (d.lines[0].points = [{ x: 150, y: 100, bendRadiusIn: 1 }]),
-    quiet: (d) => (d.lines[0].points = [{ x: 150, y: 100, bendRadiusIn: 2 }]),
+    source: 'SAE J517 / makers’ data: minimum 2 in to the inside; 2 in centreline − 0.69/2 in = 1.655 in inside',
+    raises: (d) => (d.lines[0].points = [{ x: 150, y: 100, bendRadiusIn: 2 }]),
+    quiet: (d) => (d.lines[0].points = [{ x: 150, y: 100, bendRadiusIn: 2.345 }]),
+  },
+  {
+    code: 'bend-near-socket',
+    source: 'common practice: 2 × 0.69 in OD straight past the 1.25 in of rigid fitting; this bend starts about 2.3 in from the port',
+    raises: (d) => (d.lines[0].points = [{ x: 50, y: 50, bendRadiusIn: 9 }]),
+    quiet: (d) => (d.lines[0].points = [{ x: 50, y: 50, bendRadiusIn: 4 }]),
+  },
+  {
+    code: 'free-hose-length',
+    source: 'common practice: 2 in free hose; 2 in measured + 1-1/2 in slack − 1-1/4 in − 3/4 in of fittings = 1-1/2 in',
+    raises: (d) => (d.lines[0].measuredLengthIn = 2),
+    quiet: (d) => (d.lines[0].measuredLengthIn = 3),
+  },
+  {
+    code: 'measured-length',
+    source: 'a real path is never shorter than the 30 in between the ports (common practice: 20 % allowance for perspective)',
+    raises: (d) => (d.lines[0].measuredLengthIn = 3),
+    quiet: (d) => (d.lines[0].measuredLengthIn = 24.5),
   },
   {
     code: 'heat-contact',

@@ -49,6 +49,8 @@ export const shopRulesSchema = z.object({
   minFreeHoseIn: inchesAtLeast0.default(2),
   /** How much shorter than the sketch's straight port-to-port distance a measured length may be before it is questioned. */
   measuredShortfallPercent: z.number().finite().min(0).max(90).default(20),
+  /** How much longer than the drawn route a measured length may be before a note asks to check it. */
+  measuredExcessPercent: z.number().finite().min(0).max(10_000).default(200),
   restrictionRatio: z.number().finite().min(0).max(1).default(0.8),
   cutRoundingIn: z
     .number()
@@ -84,6 +86,8 @@ export const shopRuleOrigins: Readonly<Record<keyof ShopRules, string>> = {
     'Common practice: at least 2 in of free hose between the two sockets; shorter, the hose cannot flex or take up pressure shortening — use a hard adapter or tube.',
   measuredShortfallPercent:
     'Common practice: a photo sketch is off by perspective, but a measured length more than 20 % shorter than the straight distance between the ports on the sketch points at a wrong measurement, scale or port.',
+  measuredExcessPercent:
+    'Common practice: a real path seldom runs more than three times the drawn route (200 % longer); past that a note asks whether the length was typed in another unit.',
   restrictionRatio: 'Common practice: no bore in the line smaller than 80 % of the hose inside diameter.',
   cutRoundingIn: 'Common practice: cut lengths rounded up to the next 1/8 in — cut long, never short.',
   trimAllowanceIn: 'Common practice: 1/2 in extra hose per cut for squaring the ends.',
