@@ -1,4 +1,4 @@
-import type { ConnectionSpec, Family, Gender } from '../src/connections.js';
+import type { ConnectionSpec, Family, Gender, SeatForm } from '../src/connections.js';
 import type { Part } from '../src/parts/part.schema.js';
 import { families, listSizes } from '../src/standards/tables.js';
 
@@ -18,13 +18,22 @@ function pick<T>(random: () => number, items: readonly T[]): T {
   return items[Math.floor(random() * items.length)];
 }
 
-const threadedFamilies = families.filter((f) => f !== 'barb');
+const matableFamilies = families.filter((f) => f !== 'barb');
 /** Dash sizes most lines use; generated hose-side ends stay among them so chains exist. */
 const commonDashes = ['-4', '-6', '-8', '-10', '-12'];
+/** One seat form per seat group, so an end's seat as written names its group. */
+const seatsOf: Partial<Record<Family, readonly SeatForm[]>> = {
+  metric: ['o-ring', 'bonded-washer', 'cone24-l', 'cone24-s'],
+  bspp: ['bonded-washer', 'cone60'],
+};
 
 export function randomEnd(random: () => number, gender?: Gender): ConnectionSpec {
-  const family: Family = pick(random, threadedFamilies);
-  return { family, size: pick(random, listSizes(family)), gender: gender ?? pick(random, ['male', 'female'] as const) };
+  const family: Family = pick(random, matableFamilies);
+  const seats = seatsOf[family];
+  const g = gender ?? pick(random, ['male', 'female'] as const);
+  if (!seats) return { family, size: pick(random, listSizes(family)), gender: g };
+  const seat = pick(random, seats);
+  return { family, size: pick(random, listSizes(family, seat)), gender: g, seat };
 }
 
 export function randomHoseEndSide(random: () => number): ConnectionSpec {

@@ -3,6 +3,27 @@ export * from './parts/part.schema.js';
 export * from './parts/hose-end-fits-hose.js';
 export * from './parts/fits-od.js';
 export * from './parts/part-connections.js';
+export {
+  hoseClassSchema,
+  hoseClassInfo,
+  hoseClassProblem,
+  hoseEndTypeSchema,
+  hoseEndTypeLabels,
+  type HoseClass,
+  type HoseClassInfo,
+  type HoseEndType,
+} from './parts/hose-classes.js';
+export {
+  sealCompoundSchema,
+  sealCompoundLabels,
+  compoundRating,
+  compoundProblem,
+  compoundMaxTempF,
+  suitableCompounds,
+  COMPOUND_SOURCE,
+  type SealCompound,
+  type CompoundRating,
+} from './seals/seal-compounds.js';
 export type { ThreadRow } from './standards/thread-row.js';
 export { dashToTubeOd, parseDash, MM_PER_IN } from './standards/dash.js';
 export {
@@ -13,10 +34,23 @@ export {
   threadOf,
   nptGauge,
   canonicalSize,
+  isValidConnection,
+  connectionProblem,
+  whitworthPitchDiameterIn,
   type ThreadInfo,
 } from './standards/tables.js';
-export { threadTable, type ReferenceRow } from './standards/reference.js';
-export { sealForPort } from './standards/seal.js';
+export {
+  seatFormsOf,
+  seatFormInfo,
+  seatOf,
+  defaultSeat,
+  hasSeatForms,
+  sizeHasSeat,
+  cone24TubeOd,
+  type SeatFormInfo,
+} from './standards/seat-forms.js';
+export { threadTable, sealNeedWords, type ReferenceRow } from './standards/reference.js';
+export { sealForPort, sealsForPort } from './standards/seal.js';
 export { parseMetricDesignation } from './standards/metric.table.js';
 export {
   parseUnifiedDesignation,
@@ -31,6 +65,7 @@ export type { MateCode, MateResult } from './mating/mate-result.js';
 export {
   identifyThread,
   threadReadingSchema,
+  FLANK_QUESTION,
   type ThreadReading,
   type ThreadCandidate,
 } from './identify/identify-thread.js';
@@ -43,4 +78,5 @@ export {
 } from './solver/solve-adapters.js';
 export type { ChainPart, Orientation } from './solver/adapter-index.js';
 export { portRequirementSchema, meetsRequirement, type PortRequirement } from './solver/port-requirement.js';
+export { connectionKey, matingKeys } from './solver/connection-key.js';
 export { demoSuppliers, demoParts, type DemoSupplier } from './demo/demo-catalogue.js';

@@ -19,12 +19,13 @@ function expectRankedFirst(row: ExpectedThread, candidates: ThreadCandidate[]): 
 }
 
 describe('identifyThread ranks the right size first for readings off nominal (tables as cited in DOMAIN.md §1)', () => {
-  const inchRows = expectedThreads.filter((t) => t.family !== 'metric');
-  const metricRows = expectedThreads.filter((t) => t.family === 'metric');
+  const threaded = expectedThreads.filter((t) => t.threaded);
+  const inchRows = threaded.filter((t) => t.family !== 'metric');
+  const metricRows = threaded.filter((t) => t.family === 'metric');
 
-  it.each([-0.005, 0, 0.005])('inch threads, diameter %f in off, TPI read exactly', (offset) => {
+  it.each([-0.005, 0, 0.005])('inch threads, diameter %f in off, TPI read exactly, taper and flank angle (55°/60° gauge) known', (offset) => {
     for (const row of inchRows) {
-      const candidates = identifyThread({ odIn: row.majorIn + offset, tpi: 25.4 / row.pitchMm, tapered: row.tapered });
+      const candidates = identifyThread({ odIn: row.majorIn + offset, tpi: 25.4 / row.pitchMm, tapered: row.tapered, flankAngleDeg: row.flankDeg });
       expectRankedFirst(row, candidates);
     }
   });
@@ -45,7 +46,7 @@ describe('identifyThread ranks the right size first for readings off nominal (ta
   it('without saying whether it tapers, the right size still ties for best; a tapered rival says to check for taper', () => {
     // e.g. 3/4 NPT read at its large end (~1.059 in, 14 TPI) is a true look-alike of 1-1/16-14.
     for (const row of inchRows) {
-      const candidates = identifyThread({ odIn: row.majorIn - 0.004, tpi: 25.4 / row.pitchMm });
+      const candidates = identifyThread({ odIn: row.majorIn - 0.004, tpi: 25.4 / row.pitchMm, flankAngleDeg: row.flankDeg });
       const own = candidates.find((c) => c.family === row.family && c.size === row.size);
       expect(own?.score, `${row.family} ${row.size}`).toBe(candidates[0].score);
       for (const rival of candidates.filter((c) => c.score === own?.score)) {
@@ -63,8 +64,11 @@ describe('real readings', () => {
   });
 
   it('a male 1/4 NPT measured at its small end (E0 + 0.8/n = 0.5218 in, ASME B1.20.1 Table 2) is still 1/4 NPT', () => {
-    const [first] = identifyThread({ odIn: 0.5218, tpi: 18 });
+    const [first] = identifyThread({ odIn: 0.5218, tpi: 18, tapered: true });
     expect(first).toMatchObject({ family: 'npt', size: '1/4' });
+    // Without the taper, the straight 1/4-18 NPSM (major 0.526 max, from memory) ties with it.
+    const untold = identifyThread({ odIn: 0.5218, tpi: 18 });
+    expect(untold.filter((c) => c.score === untold[0].score).map((c) => c.family)).toEqual(expect.arrayContaining(['npt', 'npsm']));
   });
 
   it('1/4 NPT and 9/16-18 both appear for an 18 TPI reading between them, with a taper hint (DOMAIN.md look-alike)', () => {
@@ -75,11 +79,43 @@ describe('real readings', () => {
     expect(candidates.find((c) => c.family === 'npt')?.hint).toMatch(/taper/);
   });
 
-  it('one candidate per family sharing a thread, each saying how to tell them apart', () => {
+  it('one candidate per family sharing a thread, each saying how to tell them apart (7/16-20: SAE J514, J512, J1926-1; banjo bolt common practice)', () => {
     const candidates = identifyThread({ odIn: 0.4375, tpi: 20 });
     const top = candidates.filter((c) => c.score === candidates[0].score);
-    expect(top.map((c) => c.family).sort()).toEqual(['flare37', 'flare45', 'orb']);
+    expect(top.map((c) => c.family).sort()).toEqual(['banjo', 'flare37', 'flare45', 'orb']);
     for (const c of top) expect(c.hint).toMatch(/Same thread as/);
+  });
+
+  it('a 1/4-19 reading (BSP, ISO 228-1 / ISO 7-1) finds BSP first and still lists 1/4 NPT (18 TPI), asking about 55° against 60°', () => {
+    const candidates = identifyThread({ odMm: 13.1, tpi: 19 });
+    expect(['bspp', 'bspt']).toContain(candidates[0].family);
+    expect(candidates[0].size).toBe('1/4');
+    const npt = candidates.find((c) => c.family === 'npt' && c.size === '1/4');
+    expect(npt).toBeDefined();
+    expect(candidates[0].question).toMatch(/55°/);
+    expect(candidates[0].hint).toMatch(/19 against 18/);
+  });
+
+  it('a 3/8-19 reading (16.66 mm, ISO 228-1) gives BSP 3/8 candidates', () => {
+    const candidates = identifyThread({ odIn: 0.655, tpi: 19 });
+    expect(candidates.slice(0, 2).map((c) => `${c.family} ${c.size}`).sort()).toEqual(['bspp 3/8', 'bspt 3/8']);
+  });
+
+  it('a 1/8-28 reading at 0.383 in (9.73 mm, ISO 228-1) ranks BSP above 1/8-27 NPT (0.405 in, ASME B1.20.1) and says how to tell them apart', () => {
+    const candidates = identifyThread({ odIn: 0.383, tpi: 28 });
+    expect(candidates[0].flankAngleDeg).toBe(55);
+    const npt = candidates.find((c) => c.family === 'npt' && c.size === '1/8');
+    expect(npt).toBeDefined();
+    expect(npt!.score).toBeLessThan(candidates[0].score);
+    expect(npt!.question).toMatch(/55° thread gauge/);
+  });
+
+  it('once a 60° gauge fits, a 1/2-14 reading drops BSP below NPT; with 55° the other way round', () => {
+    const sixty = identifyThread({ odIn: 0.835, tpi: 14, tapered: true, flankAngleDeg: 60 });
+    expect(sixty[0].family).toMatch(/^npt/);
+    expect(sixty[0].question).toBeUndefined();
+    const fiftyFive = identifyThread({ odIn: 0.835, tpi: 14, tapered: true, flankAngleDeg: 55 });
+    expect(fiftyFive[0]).toMatchObject({ family: 'bspt', size: '1/2' });
   });
 
   it('scores lie in 0..1 and come best first', () => {

@@ -8,4 +8,9 @@ export interface MateResult {
   message: string;
   /** How to tell two look-alike ends apart on the bench. */
   hint?: string;
+  /**
+   * For a joint that is allowed but needs care a reviewer should acknowledge (NPTF into NPT,
+   * a BSP taper male in a parallel port, an NPSM swivel on a pipe-thread male).
+   */
+  caution?: string;
 }

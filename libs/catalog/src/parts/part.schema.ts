@@ -1,22 +1,14 @@
 import { z } from 'zod';
 import { connectionSpecSchema } from '../connections.js';
+import { sealCompoundSchema } from '../seals/seal-compounds.js';
+import { fluidSchema } from './fluids.js';
+import { hoseClassSchema, hoseEndTypeSchema } from './hose-classes.js';
+
+export { fluidSchema, type Fluid } from './fluids.js';
 
 /** Part kinds kept in a shop's catalogue. DOMAIN.md §2. */
 export const partKindSchema = z.enum(['hose', 'hose-end', 'adapter', 'plug', 'clamp', 'sleeve', 'seal', 'bulkhead']);
 export type PartKind = z.infer<typeof partKindSchema>;
-
-/** Fluids a circuit can carry; hoses list the ones they are rated for. */
-export const fluidSchema = z.enum([
-  'atf',
-  'engine-oil',
-  'gasoline',
-  'e85',
-  'diesel',
-  'power-steering',
-  'coolant',
-  'air',
-]);
-export type Fluid = z.infer<typeof fluidSchema>;
 
 export const hoseLinerSchema = z.enum(['rubber', 'cpe', 'ptfe', 'nylon']);
 export type HoseLiner = z.infer<typeof hoseLinerSchema>;
@@ -36,16 +28,25 @@ const odRange = z
   .object({ minIn: positive, maxIn: positive })
   .refine((r) => r.minIn <= r.maxIn, { message: 'minIn must not exceed maxIn' });
 
-/** A seal a connection needs (an O-ring by AS568 dash number, or a crush washer by size). */
+/**
+ * A seal a connection needs: an O-ring by AS568 dash number (or its ISO name where it has no
+ * AS568 number), a crush washer (solid metal) or a bonded washer (metal ring with an elastomer
+ * lip) by the thread it fits over ("M14", "1/4 BSP", "3/8 in").
+ */
 export const sealNeedSchema = z.discriminatedUnion('type', [
   z.object({ type: z.literal('o-ring'), as568: z.string().min(1) }),
   z.object({ type: z.literal('crush-washer'), size: z.string().min(1) }),
+  z.object({ type: z.literal('bonded-washer'), size: z.string().min(1) }),
 ]);
 export type SealNeed = z.infer<typeof sealNeedSchema>;
 
 export const hoseAttributesSchema = z.object({
   dash,
-  hoseType: z.string().min(1), // family of hose ends it takes, e.g. "braided-rubber", "ptfe-braided", "push-lock"
+  hoseType: z.string().min(1), // family of hose ends it takes, e.g. "braided-rubber", "ptfe-braided"
+  /** The standard class the hose is made to (SAE J517 100R-series, J1532, J30, J2260, PTFE-lined…). */
+  hoseClass: hoseClassSchema.optional(),
+  /** The kinds of hose end made for it; left out when the hose type alone decides. */
+  endTypes: z.array(hoseEndTypeSchema).min(1).optional(),
   idIn: positive,
   odIn: positive,
   liner: hoseLinerSchema,
@@ -73,7 +74,12 @@ export const hoseEndAttributesSchema = z.object({
   reachIn: z.number().nonnegative().optional(),
   boreIn: positive,
   maxPressurePsi: positive,
+  /** How it holds the hose (reusable socket, crimp, push-on barbed with or without a clamp). */
+  endType: hoseEndTypeSchema.optional(),
 });
+
+/** Compound of a seal that comes fitted to the part (an adapter's or plug's O-ring or washer). */
+const fittedSeal = { sealCompound: sealCompoundSchema.optional() };
 
 export const adapterAttributesSchema = z.object({
   a: connectionSpecSchema,
@@ -85,6 +91,7 @@ export const adapterAttributesSchema = z.object({
   boreIn: positive,
   features: z.array(z.string().min(1)).default([]),
   seal: sealNeedSchema.optional(),
+  ...fittedSeal,
   maxPressurePsi: positive.optional(),
 });
 
@@ -93,11 +100,17 @@ export const plugAttributesSchema = z.object({
   /** How far the plug reaches past the port face. */
   reachIn: z.number().nonnegative().optional(),
   seal: sealNeedSchema.optional(),
+  ...fittedSeal,
   maxPressurePsi: positive.optional(),
 });
 export const clampAttributesSchema = z.object({ fitsOd: odRange });
 export const sleeveAttributesSchema = z.object({ fitsOd: odRange, maxTempF: z.number() });
-export const sealAttributesSchema = z.object({ seal: sealNeedSchema });
+export const sealAttributesSchema = z.object({
+  seal: sealNeedSchema,
+  /** Elastomer (or washer metal); left out on old rows, which the fluid rule then asks about. */
+  compound: sealCompoundSchema.optional(),
+  hardnessShoreA: z.number().int().min(30).max(100).optional(),
+});
 export const bulkheadAttributesSchema = z.object({
   a: connectionSpecSchema,
   b: connectionSpecSchema,

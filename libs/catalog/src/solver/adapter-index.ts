@@ -1,6 +1,6 @@
 import type { ConnectionSpec } from '../connections.js';
 import type { Part, PartOf } from '../parts/part.schema.js';
-import { connectionKey, matingKey } from './connection-key.js';
+import { connectionKey, matingKeys } from './connection-key.js';
 
 /** Parts that sit between a port and a hose end: adapters, and bulkheads used as adapters. */
 export type ChainPart = PartOf<'adapter'> | PartOf<'bulkhead'>;
@@ -17,9 +17,9 @@ export interface Edge {
   /** Keys worked out once per catalogue, so the search only does map look-ups. */
   inwardKey: string;
   outwardKey: string;
-  /** Key of the end that mates with `inward` / `outward`; undefined when nothing can. */
-  inwardMatingKey: string | undefined;
-  outwardMatingKey: string | undefined;
+  /** Keys of the ends that mate with `inward` / `outward`; empty when nothing can. */
+  inwardMatingKeys: readonly string[];
+  outwardMatingKeys: readonly string[];
 }
 
 export interface AdapterIndex {
@@ -51,11 +51,11 @@ export function adapterIndex(parts: readonly Part[]): AdapterIndex {
     const { a, b } = part.attributes;
     const keyA = connectionKey(a);
     const keyB = connectionKey(b);
-    const matingA = matingKey(a);
-    const matingB = matingKey(b);
+    const matingA = matingKeys(a);
+    const matingB = matingKeys(b);
     const edges: Edge[] = [
-      { part, orientation: 'a-to-port', inward: a, outward: b, inwardKey: keyA, outwardKey: keyB, inwardMatingKey: matingA, outwardMatingKey: matingB },
-      { part, orientation: 'b-to-port', inward: b, outward: a, inwardKey: keyB, outwardKey: keyA, inwardMatingKey: matingB, outwardMatingKey: matingA },
+      { part, orientation: 'a-to-port', inward: a, outward: b, inwardKey: keyA, outwardKey: keyB, inwardMatingKeys: matingA, outwardMatingKeys: matingB },
+      { part, orientation: 'b-to-port', inward: b, outward: a, inwardKey: keyB, outwardKey: keyA, inwardMatingKeys: matingB, outwardMatingKeys: matingA },
     ];
     // A part with two identical ends gives the same chain both ways round: keep one.
     const distinct = keyA === keyB ? edges.slice(0, 1) : edges;

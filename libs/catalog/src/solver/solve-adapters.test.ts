@@ -27,35 +27,40 @@ function expectChainMates(port: ConnectionSpec, hoseEndSide: ConnectionSpec, cha
   expect(mate(outward, hoseEndSide).ok).toBe(true);
   expect(chain.joints).toHaveLength(chain.parts.length + 1);
   expect(chain.joints.every((j) => j.ok)).toBe(true);
+  expect(chain.cautionCount).toBe(chain.joints.filter((j) => j.caution !== undefined).length);
   expect(chain.partCount).toBe(chain.parts.length);
 }
 
-/** Ranking key written out here: parts ascending, smallest bore descending, price ascending. */
-function rankKey(c: { partCount: number; minBoreIn: number | null; priceCents: number }): [number, number, number] {
-  return [c.partCount, -(c.minBoreIn ?? Infinity), c.priceCents];
+type RankKey = [parts: number, cautions: number, negBore: number, price: number];
+/** Ranking key written out here: parts ascending, cautioned joints ascending, smallest bore descending, price ascending. */
+function rankKey(c: { partCount: number; cautionCount: number; minBoreIn: number | null; priceCents: number }): RankKey {
+  return [c.partCount, c.cautionCount, -(c.minBoreIn ?? Infinity), c.priceCents];
 }
-function keyLess(x: [number, number, number], y: [number, number, number]): number {
-  return x[0] - y[0] || (x[1] === y[1] ? 0 : x[1] < y[1] ? -1 : 1) || x[2] - y[2];
+function keyLess(x: RankKey, y: RankKey): number {
+  return x[0] - y[0] || x[1] - y[1] || (x[2] === y[2] ? 0 : x[2] < y[2] ? -1 : 1) || x[3] - y[3];
 }
 
 /** Every chain by plain enumeration (no index, no search order), with the solver's rules. */
 function bruteForce(port: ConnectionSpec, hoseEndSide: ConnectionSpec, parts: readonly Part[], maxParts: number) {
   const chainParts = parts.filter((p): p is ChainPart => (p.kind === 'adapter' || p.kind === 'bulkhead') && !p.retired);
-  const keyOf = (c: ConnectionSpec) => `${c.family}|${c.size}|${c.gender}`;
-  const found: Array<[number, number, number]> = [];
-  const walk = (outward: ConnectionSpec, seen: string[], count: number, bore: number, price: number) => {
-    if (mate(outward, hoseEndSide).ok) found.push(rankKey({ partCount: count, minBoreIn: count === 0 ? null : bore, priceCents: price }));
+  // The generator gives one seat form per seat group, so the seat as written identifies the end.
+  const keyOf = (c: ConnectionSpec) => `${c.family}|${c.size}|${c.gender}|${c.seat ?? ''}`;
+  const found: RankKey[] = [];
+  const walk = (outward: ConnectionSpec, seen: string[], count: number, cautions: number, bore: number, price: number) => {
+    const last = mate(outward, hoseEndSide);
+    if (last.ok) found.push(rankKey({ partCount: count, cautionCount: cautions + (last.caution ? 1 : 0), minBoreIn: count === 0 ? null : bore, priceCents: price }));
     if (count === maxParts) return;
     for (const part of chainParts) {
       const symmetric = keyOf(part.attributes.a) === keyOf(part.attributes.b);
       for (const orientation of symmetric ? (['a-to-port'] as const) : (['a-to-port', 'b-to-port'] as const)) {
         const e = ends(part, orientation);
-        if (!mate(outward, e.inward).ok || seen.includes(keyOf(e.outward))) continue;
-        walk(e.outward, [...seen, keyOf(e.outward)], count + 1, Math.min(bore, part.attributes.boreIn), price + part.priceCents);
+        const joint = mate(outward, e.inward);
+        if (!joint.ok || seen.includes(keyOf(e.outward))) continue;
+        walk(e.outward, [...seen, keyOf(e.outward)], count + 1, cautions + (joint.caution ? 1 : 0), Math.min(bore, part.attributes.boreIn), price + part.priceCents);
       }
     }
   };
-  walk(port, [keyOf(port)], 0, Infinity, 0);
+  walk(port, [keyOf(port)], 0, 0, Infinity, 0);
   return found.sort(keyLess);
 }
 
@@ -70,7 +75,7 @@ describe('solveAdapters on the demo catalogue', () => {
 
   it('returns the zero-part chain when the port and hose end mate directly', () => {
     const chains = solveAdapters(s('flare37', '-6', 'male'), minusSixHoseEnd, demoParts);
-    expect(chains[0]).toMatchObject({ partCount: 0, parts: [], minBoreIn: null, priceCents: 0, bodyLengthIn: 0 });
+    expect(chains[0]).toMatchObject({ partCount: 0, cautionCount: 0, parts: [], minBoreIn: null, priceCents: 0, bodyLengthIn: 0 });
     expect(chains[0].joints).toHaveLength(1);
   });
 

@@ -4,7 +4,7 @@ import { mate } from '../mating/mate.js';
 import type { MateResult } from '../mating/mate-result.js';
 import type { Part } from '../parts/part.schema.js';
 import { adapterIndex, type ChainPart, type Edge, type Orientation } from './adapter-index.js';
-import { connectionKey, matingKey } from './connection-key.js';
+import { connectionKey, matingKeys } from './connection-key.js';
 import { MinHeap } from './min-heap.js';
 import { meetsRequirement, portRequirementSchema } from './port-requirement.js';
 
@@ -27,6 +27,8 @@ export interface AdapterChain {
   /** port↔first part, between parts, last part↔hose end side (one joint when no parts). */
   joints: MateResult[];
   partCount: number;
+  /** Joints that join but carry a caution (NPTF into NPT, a taper male into a parallel female). */
+  cautionCount: number;
   /** Smallest bore along the chain in inches; null when the chain has no parts. */
   minBoreIn: number | null;
   priceCents: number;
@@ -39,9 +41,11 @@ interface SearchNode {
   edge: Edge | undefined;
   state: ConnectionSpec;
   stateKey: string;
-  /** Key of the end that mates with `state`; undefined when nothing can. */
-  stateMatingKey: string | undefined;
+  /** Keys of the ends that mate with `state`. */
+  stateMatingKeys: readonly string[];
   count: number;
+  /** Joints so far that join across families (mate() answers those with a caution). */
+  cautions: number;
   /** Lower bound on the final part count: count + parts still needed. */
   bound: number;
   minBoreIn: number;
@@ -50,37 +54,43 @@ interface SearchNode {
   seq: number;
 }
 
-/** Ranking: fewer parts, then the larger smallest bore, then the lower price. */
+/**
+ * Ranking: fewer parts, then fewer cautioned joints, then the larger smallest bore, then the lower
+ * price. Cautions and price only grow and the bore only shrinks along a path, so best-first
+ * order over partial chains is also the order of the finished ones.
+ */
 function byRank(x: SearchNode, y: SearchNode): number {
-  return x.bound - y.bound || y.minBoreIn - x.minBoreIn || x.priceCents - y.priceCents || x.seq - y.seq;
+  return x.bound - y.bound || x.cautions - y.cautions || y.minBoreIn - x.minBoreIn || x.priceCents - y.priceCents || x.seq - y.seq;
 }
 
 export function compareChains(x: AdapterChain, y: AdapterChain): number {
   const boreX = x.minBoreIn ?? Number.POSITIVE_INFINITY;
   const boreY = y.minBoreIn ?? Number.POSITIVE_INFINITY;
   if (x.partCount !== y.partCount) return x.partCount - y.partCount;
+  if (x.cautionCount !== y.cautionCount) return x.cautionCount - y.cautionCount;
   if (boreX !== boreY) return boreY - boreX;
   return x.priceCents - y.priceCents;
 }
 
 /** Fewest parts still needed from each outward end to reach the hose end, up to maxParts. */
 function distancesToGoal(
-  goalKey: string,
+  goalKeys: readonly string[],
   byOutward: Map<string, Edge[]>,
   maxParts: number,
   usable: (edge: Edge) => boolean,
 ): Map<string, number> {
-  const dist = new Map<string, number>([[goalKey, 0]]);
-  let frontier = [goalKey];
+  const dist = new Map<string, number>(goalKeys.map((k) => [k, 0]));
+  let frontier = [...goalKeys];
   for (let d = 1; d <= maxParts && frontier.length > 0; d += 1) {
     const next: string[] = [];
     for (const key of frontier) {
       for (const edge of byOutward.get(key) ?? []) {
         if (!usable(edge)) continue;
-        const before = edge.inwardMatingKey;
-        if (before !== undefined && !dist.has(before)) {
-          dist.set(before, d);
-          next.push(before);
+        for (const before of edge.inwardMatingKeys) {
+          if (!dist.has(before)) {
+            dist.set(before, d);
+            next.push(before);
+          }
         }
       }
     }
@@ -111,6 +121,7 @@ function toChain(node: SearchNode, port: ConnectionSpec, hoseEndSide: Connection
     orientations: edges.map((e) => e.orientation),
     joints,
     partCount: edges.length,
+    cautionCount: joints.filter((joint) => joint.caution !== undefined).length,
     minBoreIn: edges.length === 0 ? null : node.minBoreIn,
     priceCents: node.priceCents,
     bodyLengthIn: edges.reduce((sum, e) => sum + e.part.attributes.bodyLengthIn, 0),
@@ -132,11 +143,12 @@ export function solveAdapters(
   const opts = solveOptionsSchema.parse(options);
   connectionSpecSchema.parse(port);
   connectionSpecSchema.parse(hoseEndSide);
-  const goalKey = matingKey(hoseEndSide);
-  if (goalKey === undefined) return [];
+  const goalKeys = matingKeys(hoseEndSide);
+  if (goalKeys.length === 0) return [];
+  const goals = new Set(goalKeys);
   const index = adapterIndex(parts);
   const usable = (edge: Edge) => !(opts.excludeRetired && edge.part.retired);
-  const dist = distancesToGoal(goalKey, index.byOutward, opts.maxParts, usable);
+  const dist = distancesToGoal(goalKeys, index.byOutward, opts.maxParts, usable);
   const portKey = connectionKey(port);
   const portDist = dist.get(portKey);
   if (portDist === undefined) return [];
@@ -149,8 +161,9 @@ export function solveAdapters(
     edge: undefined,
     state: port,
     stateKey: portKey,
-    stateMatingKey: matingKey(port),
+    stateMatingKeys: matingKeys(port),
     count: 0,
+    cautions: 0,
     bound: requirement ? Math.max(portDist, 1) : portDist,
     minBoreIn: Number.POSITIVE_INFINITY,
     priceCents: 0,
@@ -165,32 +178,34 @@ export function solveAdapters(
       if (chain) chains.push(chain);
       continue;
     }
-    if (node.stateKey === goalKey && !(requirement && node.count === 0)) {
-      heap.push({ ...node, complete: true, bound: node.count, seq: seq++ });
+    if (goals.has(node.stateKey) && !(requirement && node.count === 0)) {
+      const cautions = node.cautions + (node.state.family === hoseEndSide.family ? 0 : 1);
+      heap.push({ ...node, complete: true, bound: node.count, cautions, seq: seq++ });
     }
     if (node.count >= opts.maxParts) continue;
-    const wanted = node.stateMatingKey;
-    if (wanted === undefined) continue;
-    for (const edge of index.byInward.get(wanted) ?? []) {
-      if (!usable(edge)) continue;
-      if (node.count === 0 && requirement && !meetsRequirement(edge.part, requirement)) continue;
-      const nextKey = edge.outwardKey;
-      const remaining = dist.get(nextKey);
-      if (remaining === undefined || node.count + 1 + remaining > opts.maxParts) continue;
-      if (onPath(node, nextKey)) continue;
-      heap.push({
-        parent: node,
-        edge,
-        state: edge.outward,
-        stateKey: nextKey,
-        stateMatingKey: edge.outwardMatingKey,
-        count: node.count + 1,
-        bound: node.count + 1 + remaining,
-        minBoreIn: Math.min(node.minBoreIn, edge.part.attributes.boreIn),
-        priceCents: node.priceCents + edge.part.priceCents,
-        complete: false,
-        seq: seq++,
-      });
+    for (const wanted of node.stateMatingKeys) {
+      for (const edge of index.byInward.get(wanted) ?? []) {
+        if (!usable(edge)) continue;
+        if (node.count === 0 && requirement && !meetsRequirement(edge.part, requirement)) continue;
+        const nextKey = edge.outwardKey;
+        const remaining = dist.get(nextKey);
+        if (remaining === undefined || node.count + 1 + remaining > opts.maxParts) continue;
+        if (onPath(node, nextKey)) continue;
+        heap.push({
+          parent: node,
+          edge,
+          state: edge.outward,
+          stateKey: nextKey,
+          stateMatingKeys: edge.outwardMatingKeys,
+          count: node.count + 1,
+          cautions: node.cautions + (edge.inward.family === node.state.family ? 0 : 1),
+          bound: node.count + 1 + remaining,
+          minBoreIn: Math.min(node.minBoreIn, edge.part.attributes.boreIn),
+          priceCents: node.priceCents + edge.part.priceCents,
+          complete: false,
+          seq: seq++,
+        });
+      }
     }
   }
   return chains.sort(compareChains);

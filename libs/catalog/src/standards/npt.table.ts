@@ -8,6 +8,7 @@ function nptRow(size: string, pipeOdIn: number, tpi: number): ThreadRow {
     family: 'npt',
     size,
     designation: `${size}-${tpi} NPT`,
+    flankAngleDeg: 60, // ASME B1.20.1: 60° thread form
     majorDiameterIn: pipeOdIn,
     tpi,
     tapered: true,

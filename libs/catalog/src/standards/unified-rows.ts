@@ -19,6 +19,7 @@ export function unifiedRow(
     majorDiameterIn: thread.majorDiameterIn,
     tpi: thread.tpi,
     tapered: false,
+    flankAngleDeg: 60, // ASME B1.1 basic profile: 60° included angle
     tubeOdIn,
     threaded: true,
     source,
