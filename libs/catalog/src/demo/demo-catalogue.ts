@@ -1,5 +1,7 @@
 import type { ConnectionSpec, Family } from '../connections.js';
+import type { HoseClass, HoseEndType } from '../parts/hose-classes.js';
 import type { Fluid, Part, PartOf, SaleUnit, SealNeed } from '../parts/part.schema.js';
+import type { SealCompound } from '../seals/seal-compounds.js';
 
 /**
  * Invented demo catalogue for the demo shop "Tidewater Rod & Diesel": suppliers, part numbers,
@@ -46,14 +48,17 @@ function common(c: Common) {
   };
 }
 
-const end = (family: Family, size: string, gender: ConnectionSpec['gender']): ConnectionSpec => ({ family, size, gender });
+const end = (family: Family, size: string, gender: ConnectionSpec['gender'], seat?: ConnectionSpec['seat']): ConnectionSpec =>
+  seat === undefined ? { family, size, gender } : { family, size, gender, seat };
 const oring = (as568: string): SealNeed => ({ type: 'o-ring', as568 });
 
 // --- Hose: -6 and -8 in two liners --------------------------------------------------------
 interface HoseLine {
   key: string;
   hoseType: string;
-  liner: 'cpe' | 'ptfe';
+  hoseClass?: HoseClass;
+  endTypes: HoseEndType[];
+  liner: 'cpe' | 'ptfe' | 'rubber';
   label: string;
   fluids: Fluid[];
   sizes: Array<{ dash: 6 | 8; idIn: number; odIn: number; psi: number; bendIn: number; price: number; pn: string }>;
@@ -65,6 +70,7 @@ const hoseLines: HoseLine[] = [
   {
     key: 'rubber',
     hoseType: 'braided-rubber',
+    endTypes: ['reusable', 'crimp'],
     liner: 'cpe',
     label: 'CPE-lined braided rubber hose',
     fluids: petroleum,
@@ -77,6 +83,8 @@ const hoseLines: HoseLine[] = [
   {
     key: 'ptfe',
     hoseType: 'ptfe-braided',
+    hoseClass: 'ptfe-braided',
+    endTypes: ['reusable', 'crimp'],
     liner: 'ptfe',
     label: 'PTFE-lined braided hose (ethanol fuel)',
     fluids: [...petroleum, 'e85', 'coolant'],
@@ -86,6 +94,18 @@ const hoseLines: HoseLine[] = [
       { dash: 6, idIn: 0.31, odIn: 0.58, psi: 1500, bendIn: 3.5, price: 1150, pn: 'HL-7340-06' },
       { dash: 8, idIn: 0.4, odIn: 0.7, psi: 1250, bendIn: 4.5, price: 1425, pn: 'HL-7340-08' },
     ],
+  },
+  {
+    key: 'cooler',
+    hoseType: 'cooler-hose',
+    hoseClass: 'sae-j1532-150',
+    endTypes: ['push-on-clamp', 'crimp'],
+    liner: 'rubber',
+    label: 'Transmission oil cooler hose, SAE J1532 Type A, 150 °C class',
+    fluids: ['atf'],
+    maxTempF: 302, // SAE J1532 150 °C class
+    // SAE J1532 Type A: 250 psi (1.7 MPa) working pressure.
+    sizes: [{ dash: 6, idIn: 0.375, odIn: 0.69, psi: 250, bendIn: 2.0, price: 310, pn: 'HL-40001' }],
   },
 ];
 
@@ -104,6 +124,8 @@ const hoses: PartOf<'hose'>[] = hoseLines.flatMap((line) =>
     attributes: {
       dash: s.dash,
       hoseType: line.hoseType,
+      ...(line.hoseClass ? { hoseClass: line.hoseClass } : {}),
+      endTypes: line.endTypes,
       idIn: s.idIn,
       odIn: s.odIn,
       liner: line.liner,
@@ -122,7 +144,8 @@ const endAngles = [
   { angle: 90 as const, word: '90°', allowanceIn: 1.5, borePenaltyIn: 0.03, price: 460 },
 ];
 
-const hoseEnds: PartOf<'hose-end'>[] = hoses.flatMap((hose) =>
+const braidedHoses = hoses.filter((hose) => hose.attributes.hoseType !== 'cooler-hose');
+const braidedHoseEnds: PartOf<'hose-end'>[] = braidedHoses.flatMap((hose) =>
   endAngles.map((a) => {
     const ptfe = hose.attributes.liner === 'ptfe';
     const dash = hose.attributes.dash;
@@ -144,10 +167,61 @@ const hoseEnds: PartOf<'hose-end'>[] = hoses.flatMap((hose) =>
         allowanceIn: a.allowanceIn + (ptfe ? 0.1 : 0) + (dash === 8 ? 0.1 : 0),
         boreIn: (ptfe ? hose.attributes.idIn - 0.06 : hose.attributes.idIn - 0.07) - a.borePenaltyIn,
         maxPressurePsi: hose.attributes.maxPressurePsi,
+        endType: 'reusable' as const,
       },
     };
   }),
 );
+
+// Barbed hose ends for the cooler hose, held by a hose clamp; a banjo hose end for braided rubber.
+// Part numbers from here on follow the demo's own sequential scheme (supplier prefix + 5 digits).
+const coolerHoseEnds: PartOf<'hose-end'>[] = endAngles.map((a, i) => ({
+  ...common({
+    id: `demo-hose-end-6-cooler-${a.angle}`,
+    supplierId: HARBOR,
+    supplierPartNumber: `HL-4001${i + 1}`,
+    description: `-6 ${a.word} barbed hose end with hose clamp for cooler hose, -6 37° female swivel`,
+    priceCents: 640 + a.price,
+    stockOnHand: 4,
+  }),
+  kind: 'hose-end' as const,
+  attributes: {
+    hoseDash: 6,
+    hoseTypes: ['cooler-hose'],
+    port: end('flare37', '-6', 'female'),
+    angle: a.angle,
+    allowanceIn: a.allowanceIn + 0.2,
+    boreIn: 0.3 - a.borePenaltyIn,
+    maxPressurePsi: 250,
+    endType: 'push-on-clamp' as const,
+  },
+}));
+
+const banjoHoseEnds: PartOf<'hose-end'>[] = [
+  {
+    ...common({
+      id: 'demo-hose-end-6-rubber-banjo-m14',
+      supplierId: RIDGEBACK,
+      supplierPartNumber: 'RF-40101',
+      description: '-6 banjo hose end for braided rubber hose, M14x1.5 banjo bolt (turbo oil feed)',
+      priceCents: 1980,
+      stockOnHand: 2,
+    }),
+    kind: 'hose-end',
+    attributes: {
+      hoseDash: 6,
+      hoseTypes: ['braided-rubber'],
+      port: end('banjo', 'M14x1.5', 'male'),
+      angle: 90,
+      allowanceIn: 1.1,
+      boreIn: 0.18, // the banjo bolt's drilling
+      maxPressurePsi: 1000,
+      endType: 'reusable',
+    },
+  },
+];
+
+const hoseEnds: PartOf<'hose-end'>[] = [...braidedHoseEnds, ...coolerHoseEnds, ...banjoHoseEnds];
 
 // --- Adapters: port thread (side a) to 37° flare (side b) for the demo circuits --------------
 interface AdapterRow {
@@ -163,6 +237,7 @@ interface AdapterRow {
   boreIn: number;
   features?: string[];
   seal?: SealNeed;
+  sealCompound?: SealCompound;
 }
 
 const adapterRows: AdapterRow[] = [
@@ -175,7 +250,7 @@ const adapterRows: AdapterRow[] = [
   // Cooler: 5/8-18 inverted flare port (3/8 in tube, the same tube size as -6).
   { id: 'demo-adapter-invf6-f37-6', supplierId: RIDGEBACK, pn: 'RF-218-0606', description: '3/8 tube inverted flare male (5/8-18) to -6 37° flare male', price: 725, a: end('invflare45', '3/8', 'male'), b: end('flare37', '-6', 'male'), bodyLengthIn: 1.05, boreIn: 0.3 },
   // Engine-oil cooler circuit: M22x1.5 on the engine, -10 ORB on the cooler, -8 hose.
-  { id: 'demo-adapter-m22-f37-8', supplierId: RIDGEBACK, pn: 'RF-322-0822', description: 'M22x1.5 O-ring port male to -8 37° flare male', price: 1480, a: end('metric', 'M22x1.5', 'male'), b: end('flare37', '-8', 'male'), bodyLengthIn: 1.1, boreIn: 0.41, seal: oring('ISO 6149-1 M22x1.5 (19.3x2.2)') },
+  { id: 'demo-adapter-m22-f37-8', supplierId: RIDGEBACK, pn: 'RF-322-0822', description: 'M22x1.5 O-ring port male to -8 37° flare male', price: 1480, a: end('metric', 'M22x1.5', 'male', 'o-ring'), b: end('flare37', '-8', 'male'), bodyLengthIn: 1.1, boreIn: 0.41, seal: oring('ISO 6149-1 M22x1.5 (19.3x2.2)') },
   { id: 'demo-adapter-orb10-f37-8', supplierId: RIDGEBACK, pn: 'RF-206-0810', description: '-10 O-ring boss male to -8 37° flare male, reducing', price: 935, a: end('orb', '-10', 'male'), b: end('flare37', '-8', 'male'), bodyLengthIn: 1.05, boreIn: 0.41, seal: oring('910') },
   // Fuel return system: -6 / -8 ORB on pump and regulator, 3/8 NPT on the tank.
   { id: 'demo-adapter-orb8-f37-8', supplierId: HARBOR, pn: 'HL-3208-08', description: '-8 O-ring boss male to -8 37° flare male', price: 765, a: end('orb', '-8', 'male'), b: end('flare37', '-8', 'male'), bodyLengthIn: 1.0, boreIn: 0.41, seal: oring('908') },
@@ -185,6 +260,23 @@ const adapterRows: AdapterRow[] = [
   { id: 'demo-adapter-orb6-f37-6-hl', supplierId: HARBOR, pn: 'HL-3206-06', description: '-6 O-ring boss male to -6 37° flare male', price: 690, a: end('orb', '-6', 'male'), b: end('flare37', '-6', 'male'), bodyLengthIn: 0.95, boreIn: 0.31, seal: oring('906') },
   // Reducer: -8 37° female swivel to -6 37° male, for a -6 hose on a -8 fitting.
   { id: 'demo-adapter-f37-8f-6m', supplierId: HARBOR, pn: 'HL-3410-0806', description: '-8 37° flare female swivel to -6 37° flare male reducer', price: 880, a: end('flare37', '-8', 'female'), b: end('flare37', '-6', 'male'), bodyLengthIn: 1.0, boreIn: 0.31 },
+  // Imported transmission with metric cooler ports: washer-sealed (ISO 9974-2 / DIN 3852), sealing-edge and ISO 6149 O-ring studs.
+  { id: 'demo-adapter-m14w-f37-6', supplierId: RIDGEBACK, pn: 'RF-40102', description: 'M14x1.5 washer-sealed stud to -6 37° flare male', price: 690, a: end('metric', 'M14x1.5', 'male', 'bonded-washer'), b: end('flare37', '-6', 'male'), bodyLengthIn: 1.0, boreIn: 0.3, seal: { type: 'bonded-washer', size: 'M14' } },
+  { id: 'demo-adapter-m16w-f37-6', supplierId: RIDGEBACK, pn: 'RF-40103', description: 'M16x1.5 washer-sealed stud to -6 37° flare male', price: 720, a: end('metric', 'M16x1.5', 'male', 'bonded-washer'), b: end('flare37', '-6', 'male'), bodyLengthIn: 1.0, boreIn: 0.31, seal: { type: 'bonded-washer', size: 'M16' } },
+  { id: 'demo-adapter-m14e-f37-6', supplierId: RIDGEBACK, pn: 'RF-40104', description: 'M14x1.5 sealing-edge stud to -6 37° flare male', price: 655, a: end('metric', 'M14x1.5', 'male', 'sealing-edge'), b: end('flare37', '-6', 'male'), bodyLengthIn: 1.0, boreIn: 0.3 },
+  { id: 'demo-adapter-m14o-f37-6', supplierId: RIDGEBACK, pn: 'RF-40105', description: 'M14x1.5 O-ring stud (ISO 6149) to -6 37° flare male', price: 780, a: end('metric', 'M14x1.5', 'male', 'o-ring'), b: end('flare37', '-6', 'male'), bodyLengthIn: 1.05, boreIn: 0.3, seal: oring('ISO 6149-1 M14x1.5 (11.3x2.2)'), sealCompound: 'nitrile' },
+  // Imported cooler with BSP parallel ports (washer-sealed, ISO 1179-2) and a BSP taper sender port.
+  { id: 'demo-adapter-bspp12-f37-8', supplierId: HARBOR, pn: 'HL-40021', description: '1/2 BSPP washer-sealed stud to -8 37° flare male', price: 840, a: end('bspp', '1/2', 'male', 'bonded-washer'), b: end('flare37', '-8', 'male'), bodyLengthIn: 1.1, boreIn: 0.41, seal: { type: 'bonded-washer', size: '1/2 BSP' } },
+  { id: 'demo-adapter-bspp38-f37-6', supplierId: HARBOR, pn: 'HL-40022', description: '3/8 BSPP washer-sealed stud to -6 37° flare male', price: 760, a: end('bspp', '3/8', 'male', 'bonded-washer'), b: end('flare37', '-6', 'male'), bodyLengthIn: 1.0, boreIn: 0.31, seal: { type: 'bonded-washer', size: '3/8 BSP' } },
+  { id: 'demo-adapter-bspt14-f37-6', supplierId: HARBOR, pn: 'HL-40023', description: '1/4 BSPT male to -6 37° flare male', price: 560, a: end('bspt', '1/4', 'male'), b: end('flare37', '-6', 'male'), bodyLengthIn: 1.1, boreIn: 0.27 },
+  // Factory cooler and fuel lines with quick-connect end forms (SAE J2044): connector with retainer to -6.
+  { id: 'demo-adapter-qc38-f37-6', supplierId: RIDGEBACK, pn: 'RF-40106', description: '3/8 in quick-connect female with retainer (SAE J2044) to -6 37° flare male', price: 1350, a: end('qc', '3/8', 'female'), b: end('flare37', '-6', 'male'), bodyLengthIn: 1.6, boreIn: 0.28, sealCompound: 'fluorocarbon' },
+  { id: 'demo-adapter-qc516-f37-6', supplierId: RIDGEBACK, pn: 'RF-40107', description: '5/16 in quick-connect female with retainer (SAE J2044) to -6 37° flare male', price: 1320, a: end('qc', '5/16', 'female'), b: end('flare37', '-6', 'male'), bodyLengthIn: 1.6, boreIn: 0.24, sealCompound: 'fluorocarbon' },
+  // Power steering: O-ring face seal; pipe-thread variants.
+  { id: 'demo-adapter-orfs6-orb6', supplierId: HARBOR, pn: 'HL-40024', description: '-6 O-ring face seal male to -6 O-ring boss male', price: 910, a: end('orb', '-6', 'male'), b: end('orfs', '-6', 'male'), bodyLengthIn: 1.2, boreIn: 0.3, seal: oring('906') },
+  { id: 'demo-adapter-orfs6-f37-6', supplierId: HARBOR, pn: 'HL-40025', description: '-6 O-ring face seal female swivel to -6 37° flare male', price: 980, a: end('orfs', '-6', 'female'), b: end('flare37', '-6', 'male'), bodyLengthIn: 1.3, boreIn: 0.3, seal: oring('012') },
+  { id: 'demo-adapter-nptf18-f37-4', supplierId: HARBOR, pn: 'HL-40026', description: '1/8 NPTF male to -4 37° flare male (gauge port)', price: 410, a: end('nptf', '1/8', 'male'), b: end('flare37', '-4', 'male'), bodyLengthIn: 0.9, boreIn: 0.17 },
+  { id: 'demo-adapter-npsm14-f37-6', supplierId: HARBOR, pn: 'HL-40027', description: '1/4 NPSM female swivel to -6 37° flare male', price: 620, a: end('npsm', '1/4', 'female'), b: end('flare37', '-6', 'male'), bodyLengthIn: 1.1, boreIn: 0.28 },
 ];
 
 /** Invented working pressure for the demo's steel fittings and plugs (far above any demo circuit). */
@@ -201,6 +293,7 @@ const adapters: PartOf<'adapter'>[] = adapterRows.map((r) => ({
     boreIn: r.boreIn,
     features: r.features ?? [],
     ...(r.seal ? { seal: r.seal } : {}),
+    ...(r.sealCompound ? { sealCompound: r.sealCompound } : {}),
     maxPressurePsi: DEMO_FITTING_PSI,
   },
 }));
@@ -240,17 +333,49 @@ const sleeves: PartOf<'sleeve'>[] = [
   attributes: { fitsOd: { minIn: s.minIn, maxIn: s.maxIn }, maxTempF: 500 },
 }));
 
-const seals: PartOf<'seal'>[] = [
-  { id: 'demo-oring-906', pn: 'RF-906-10', description: 'O-ring AS568-906, pack of 10', seal: oring('906'), price: 350 },
-  { id: 'demo-oring-908', pn: 'RF-908-10', description: 'O-ring AS568-908, pack of 10', seal: oring('908'), price: 380 },
-  { id: 'demo-oring-910', pn: 'RF-910-10', description: 'O-ring AS568-910, pack of 10', seal: oring('910'), price: 410 },
-  { id: 'demo-oring-m22', pn: 'RF-922-10', description: 'O-ring for ISO 6149-1 M22x1.5 port, pack of 10', seal: oring('ISO 6149-1 M22x1.5 (19.3x2.2)'), price: 520 },
-  { id: 'demo-crush-washer-m14', pn: 'HL-8014-10', description: 'Crush washer M14, pack of 10', seal: { type: 'crush-washer' as const, size: 'M14' }, price: 290 },
-  { id: 'demo-crush-washer-m22', pn: 'HL-8022-10', description: 'Crush washer M22, pack of 10', seal: { type: 'crush-washer' as const, size: 'M22' }, price: 340 },
-].map((s) => ({
-  ...common({ id: s.id, supplierId: s.pn.startsWith('RF') ? RIDGEBACK : HARBOR, supplierPartNumber: s.pn, description: s.description, priceCents: s.price, saleUnit: packOf10, stockOnHand: 1 }),
+interface SealRow {
+  id: string;
+  pn: string;
+  seal: SealNeed;
+  compound: SealCompound;
+  hardnessShoreA?: number;
+  price: number;
+}
+
+const washer = (type: 'bonded-washer' | 'crush-washer', size: string): SealNeed => ({ type, size });
+const sealRows: SealRow[] = [
+  { id: 'demo-oring-906', pn: 'RF-906-10', seal: oring('906'), compound: 'nitrile', hardnessShoreA: 90, price: 350 },
+  { id: 'demo-oring-908', pn: 'RF-908-10', seal: oring('908'), compound: 'nitrile', hardnessShoreA: 90, price: 380 },
+  { id: 'demo-oring-910', pn: 'RF-910-10', seal: oring('910'), compound: 'nitrile', hardnessShoreA: 90, price: 410 },
+  { id: 'demo-oring-m22', pn: 'RF-922-10', seal: oring('ISO 6149-1 M22x1.5 (19.3x2.2)'), compound: 'nitrile', hardnessShoreA: 90, price: 520 },
+  { id: 'demo-crush-washer-m14', pn: 'HL-8014-10', seal: washer('crush-washer', 'M14'), compound: 'copper', price: 290 },
+  { id: 'demo-crush-washer-m22', pn: 'HL-8022-10', seal: washer('crush-washer', 'M22'), compound: 'copper', price: 340 },
+  // Fluorocarbon O-rings for ethanol fuel (E85) and hot oil; bonded washers for washer-sealed ports.
+  { id: 'demo-oring-906-fkm', pn: 'RF-40108', seal: oring('906'), compound: 'fluorocarbon', hardnessShoreA: 90, price: 690 },
+  { id: 'demo-oring-908-fkm', pn: 'RF-40109', seal: oring('908'), compound: 'fluorocarbon', hardnessShoreA: 90, price: 740 },
+  { id: 'demo-oring-910-fkm', pn: 'RF-40110', seal: oring('910'), compound: 'fluorocarbon', hardnessShoreA: 90, price: 790 },
+  { id: 'demo-oring-m14', pn: 'RF-40111', seal: oring('ISO 6149-1 M14x1.5 (11.3x2.2)'), compound: 'nitrile', hardnessShoreA: 90, price: 480 },
+  { id: 'demo-oring-orfs-012', pn: 'RF-40112', seal: oring('012'), compound: 'nitrile', hardnessShoreA: 90, price: 330 },
+  { id: 'demo-bonded-washer-m14', pn: 'HL-40031', seal: washer('bonded-washer', 'M14'), compound: 'nitrile', price: 360 },
+  { id: 'demo-bonded-washer-m14-fkm', pn: 'HL-40032', seal: washer('bonded-washer', 'M14'), compound: 'fluorocarbon', price: 620 },
+  { id: 'demo-bonded-washer-m16', pn: 'HL-40033', seal: washer('bonded-washer', 'M16'), compound: 'nitrile', price: 380 },
+  { id: 'demo-bonded-washer-12bsp', pn: 'HL-40034', seal: washer('bonded-washer', '1/2 BSP'), compound: 'nitrile', price: 420 },
+  { id: 'demo-bonded-washer-38bsp', pn: 'HL-40035', seal: washer('bonded-washer', '3/8 BSP'), compound: 'nitrile', price: 400 },
+];
+
+/** How the catalogue names a seal: kind and size, then hardness and compound ("O-ring AS568-906, 90 Shore A fluorocarbon"). */
+function sealWords(row: SealRow): string {
+  const need = row.seal;
+  const kind =
+    need.type === 'o-ring' ? (/^\d+$/.test(need.as568) ? `O-ring AS568-${need.as568}` : `O-ring ${need.as568}`) : `${need.type === 'bonded-washer' ? 'Bonded washer' : 'Crush washer'} ${need.size}`;
+  const material = row.hardnessShoreA === undefined ? row.compound : `${row.hardnessShoreA} Shore A ${row.compound}`;
+  return `${kind}, ${material}, pack of 10`;
+}
+
+const seals: PartOf<'seal'>[] = sealRows.map((s) => ({
+  ...common({ id: s.id, supplierId: s.pn.startsWith('RF') ? RIDGEBACK : HARBOR, supplierPartNumber: s.pn, description: sealWords(s), priceCents: s.price, saleUnit: packOf10, stockOnHand: 1 }),
   kind: 'seal' as const,
-  attributes: { seal: s.seal },
+  attributes: { seal: s.seal, compound: s.compound, ...(s.hardnessShoreA === undefined ? {} : { hardnessShoreA: s.hardnessShoreA }) },
 }));
 
 export const demoParts: Part[] = [...hoses, ...hoseEnds, ...adapters, ...bulkheads, ...plugs, ...clamps, ...sleeves, ...seals];

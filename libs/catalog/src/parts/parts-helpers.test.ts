@@ -22,6 +22,17 @@ describe('parts helpers', () => {
     expect(hoseEndFitsHose(end, rubber8)).toBe(false);
   });
 
+  it('a hose end fits only the kinds of hose end its hose is made for (a barbed end on the cooler hose, not on braided hose)', () => {
+    const cooler = byId('demo-hose-6-cooler', 'hose');
+    const barbed = byId('demo-hose-end-6-cooler-0', 'hose-end');
+    expect(hoseEndFitsHose(barbed, cooler)).toBe(true);
+    const reusable = { ...barbed, attributes: { ...barbed.attributes, endType: 'reusable' as const } };
+    expect(hoseEndFitsHose(reusable, cooler)).toBe(false);
+    const untyped = { ...barbed, attributes: { ...barbed.attributes, endType: undefined } };
+    expect(hoseEndFitsHose(untyped, cooler)).toBe(true);
+    expect(hoseEndFitsHose(barbed, byId('demo-hose-6-rubber', 'hose'))).toBe(false);
+  });
+
   it('a clamp fits hose ODs inside its range, ends included', () => {
     const clamp = byId('demo-clamp-11-16', 'clamp');
     expect(fitsOd(clamp, 0.63)).toBe(true);
