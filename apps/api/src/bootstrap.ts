@@ -8,6 +8,7 @@ import { Logger } from 'nestjs-pino';
 import { dirname, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { AppModule } from './app.module.js';
+import { AppConfigService } from './config/app-config.service.js';
 import { AllExceptionsFilter } from './common/errors/all-exceptions.filter.js';
 import { ZodValidationPipe } from './common/validation/zod-validation.pipe.js';
 
@@ -32,6 +33,9 @@ export async function createApp(options: CreateAppOptions = {}): Promise<NestExp
     cors: false,
   });
   app.useLogger(app.get(Logger));
+  const config = app.get(AppConfigService);
+  // Which hops may tell us the client's address and scheme (X-Forwarded-For/-Proto); none by default.
+  app.set('trust proxy', config.get('TRUST_PROXY'));
   app.setGlobalPrefix(API_PREFIX);
   // A sketch document of a large circuit (hundreds of lines, thousands of corners) exceeds the
   // 100 kB default; zod still validates every body.
@@ -47,7 +51,7 @@ export async function createApp(options: CreateAppOptions = {}): Promise<NestExp
   app.use(cookieParser());
   app.useGlobalFilters(new AllExceptionsFilter());
   app.useGlobalPipes(new ZodValidationPipe());
-  setUpApiDocs(app);
+  if (config.get('API_DOCS') === 'on') setUpApiDocs(app);
   return app;
 }
 

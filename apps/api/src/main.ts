@@ -7,7 +7,7 @@ async function main(): Promise<void> {
   const config = parseAppConfig(process.env);
   const app = await createApp();
   app.enableShutdownHooks();
-  await app.listen(config.PORT);
+  await app.listen(config.PORT, config.HOST);
 }
 
 main().catch((error: unknown) => {

@@ -1,5 +1,5 @@
 import { RefreshTokenEntity } from '../src/auth/refresh-token.entity.js';
-import { hashRefreshToken } from '../src/auth/refresh-tokens.service.js';
+import { hashRefreshToken, REFRESH_GRACE_MS } from '../src/auth/refresh-tokens.service.js';
 import type { UserEntity } from '../src/users/user.entity.js';
 import { UsersService } from '../src/users/users.service.js';
 import { createTestShop, refreshCookieOf, removeShops, signIn, TEST_PASSWORD, type TestShop } from './support/fixtures.js';
@@ -81,7 +81,14 @@ describe('auth (e2e)', () => {
     await testApp.http().post('/api/auth/refresh').set('Cookie', session.cookie).expect(401);
   });
 
-  it('rotates the refresh token, and a reused token revokes the whole family', async () => {
+  /** Moves the moment a refresh token was exchanged back in time (to leave the grace window). */
+  const exchangedAgo = async (cookie: string, ms: number) =>
+    testApp.dataSource.query(`UPDATE refresh_tokens SET revoked_at = revoked_at - make_interval(secs => $2) WHERE token_hash = $1`, [
+      hashRefreshToken(tokenOf(cookie)),
+      ms / 1000,
+    ]);
+
+  it('rotates the refresh token; reuse after the grace window revokes the whole family', async () => {
     const session = await signIn(testApp, fabricator.email);
 
     const first = await testApp.http().post('/api/auth/refresh').set('Cookie', session.cookie).expect(200);
@@ -90,12 +97,14 @@ describe('auth (e2e)', () => {
     const rotatedCookie = refreshCookieOf(first.headers);
     expect(rotatedCookie).not.toBe(session.cookie);
 
-    // The first cookie was already exchanged: presenting it again is a reuse.
+    // 31 s later (REFRESH_GRACE_MS is 30 s) the first cookie is a reuse: a copy leaked.
+    await exchangedAgo(session.cookie, REFRESH_GRACE_MS + 1_000);
     const reuse = await testApp.http().post('/api/auth/refresh').set('Cookie', session.cookie).expect(401);
     expect(reuse.body.code).toBe('unauthorized');
 
-    // ...which ended the family, so the legitimate successor no longer works either.
+    // ...which ended the family, so the legitimate successor and its access token stop working too.
     await testApp.http().post('/api/auth/refresh').set('Cookie', rotatedCookie).expect(401);
+    await testApp.http().get('/api/me').set('Authorization', `Bearer ${first.body.accessToken}`).expect(401);
 
     const tokens = testApp.dataSource.getRepository(RefreshTokenEntity);
     const firstRow = await tokens.findOneByOrFail({ tokenHash: hashRefreshToken(tokenOf(session.cookie)) });
@@ -103,6 +112,55 @@ describe('auth (e2e)', () => {
     expect(family).toHaveLength(2);
     expect(family.every((row) => row.revokedAt !== null)).toBe(true);
     expect(firstRow.replacedBy).toBe(family.find((row) => row.id !== firstRow.id)?.id);
+  });
+
+  it('keeps two tabs refreshing at once signed in: both get the same successor', async () => {
+    const session = await signIn(testApp, fabricator.email);
+    const [a, b] = await Promise.all([
+      testApp.http().post('/api/auth/refresh').set('Cookie', session.cookie),
+      testApp.http().post('/api/auth/refresh').set('Cookie', session.cookie),
+    ]);
+    expect([a.status, b.status]).toEqual([200, 200]);
+    expect(refreshCookieOf(a.headers)).toBe(refreshCookieOf(b.headers));
+    // The shared successor keeps working, and so do both access tokens.
+    const next = await testApp.http().post('/api/auth/refresh').set('Cookie', refreshCookieOf(a.headers)).expect(200);
+    for (const token of [a.body.accessToken, b.body.accessToken, next.body.accessToken]) {
+      await testApp.http().get('/api/me').set('Authorization', `Bearer ${token}`).expect(200);
+    }
+    // A repeat within the window after the successor itself was exchanged is a reuse (its successor is gone).
+    await exchangedAgo(session.cookie, 0);
+    await testApp.http().post('/api/auth/refresh').set('Cookie', session.cookie).expect(401);
+  });
+
+  it('ends every session at once when a user is deactivated, re-roled or resets the password, and on sign-out', async () => {
+    const users = testApp.app.get(UsersService);
+    const me = (token: string) => testApp.http().get('/api/me').set('Authorization', `Bearer ${token}`);
+
+    const demoted = await shop.addUser(['admin', 'reviewer'], 'demoted');
+    const [one, two] = [await signIn(testApp, demoted.email), await signIn(testApp, demoted.email)];
+    await me(one.accessToken).expect(200);
+    await users.updateUser(shop.shop.id, 'someone-else', demoted.id, { version: demoted.version, roles: ['reviewer'] });
+    for (const session of [one, two]) {
+      await me(session.accessToken).expect(401);
+      await testApp.http().post('/api/auth/refresh').set('Cookie', session.cookie).expect(401);
+    }
+    // A fresh sign-in carries the new roles, read from the database.
+    const again = await signIn(testApp, demoted.email);
+    expect((await me(again.accessToken).expect(200)).body.roles).toEqual(['reviewer']);
+
+    const renamed = await shop.addUser(['fabricator'], 'renamed');
+    const kept = await signIn(testApp, renamed.email);
+    await users.updateUser(shop.shop.id, 'someone-else', renamed.id, { version: renamed.version, displayName: 'New name' });
+    await me(kept.accessToken).expect(200);
+
+    const leaving = await shop.addUser(['parts-clerk'], 'deactivated');
+    const leavingSession = await signIn(testApp, leaving.email);
+    await users.updateUser(shop.shop.id, 'someone-else', leaving.id, { version: leaving.version, active: false });
+    await me(leavingSession.accessToken).expect(401);
+
+    const outgoing = await signIn(testApp, fabricator.email);
+    await testApp.http().post('/api/auth/logout').set('Cookie', outgoing.cookie).expect(204);
+    await me(outgoing.accessToken).expect(401);
   });
 
   it('stores only the sha256 of refresh tokens', async () => {

@@ -284,7 +284,14 @@ describe('cut-list spreadsheets and orders (e2e)', () => {
         expect(done.body.lines.every((l: ApiOrderLine) => l.receivedQuantity === l.quantity)).toBe(true);
       }
       expect((await parts.findOneByOrFail({ id: line.partId })).stockOnHand).toBeCloseTo(before + line.quantity, 6);
-      await testApp.http().post(`/api/orders/${order.id}/receive`).set(as(clerkToken)).send({ lines: [{ orderLineId: line.id, quantity: 1 }] }).expect(409);
+      // A new receipt (its own Idempotency-Key, as the web app sends per click) of a received order.
+      await testApp
+        .http()
+        .post(`/api/orders/${order.id}/receive`)
+        .set(as(clerkToken))
+        .set('Idempotency-Key', 'one-more-receipt')
+        .send({ lines: [{ orderLineId: line.id, quantity: 1 }] })
+        .expect(409);
     });
   });
 });

@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { UploadEntity } from '../src/uploads/upload.entity.js';
 import { AppConfigService } from '../src/config/app-config.service.js';
-import { JWT_ISSUER } from '../src/auth/jwt.strategy.js';
+import { JWT_AUDIENCE, JWT_ISSUER } from '../src/auth/jwt.strategy.js';
 import { createBuild } from './support/builds.js';
 import { createTestShop, removeShops, signIn, type TestShop } from './support/fixtures.js';
 import { pngBytes } from './support/image-bytes.js';
@@ -32,7 +32,7 @@ describe('security checks (e2e)', () => {
   let testApp: TestApp;
   let shop: TestShop;
   let fabToken: string;
-  let fabClaims: { sub: string; shopId: string; roles: string[] };
+  let fabClaims: { sub: string; sid: string };
   let secret: string;
   let buildId: string;
   const now = () => Math.floor(Date.now() / 1000);
@@ -43,7 +43,8 @@ describe('security checks (e2e)', () => {
     shop = await createTestShop(testApp, 'security');
     const fab = await shop.addUser(['fabricator']);
     fabToken = (await signIn(testApp, fab.email)).accessToken;
-    fabClaims = { sub: fab.id, shopId: shop.shop.id, roles: ['fabricator'] };
+    const signed = JSON.parse(Buffer.from(fabToken.split('.')[1], 'base64url').toString('utf8')) as { sid: string };
+    fabClaims = { sub: fab.id, sid: signed.sid };
     secret = testApp.app.get(AppConfigService).get('JWT_SECRET');
     buildId = (await createBuild(testApp, fabToken, { vehicle: { make: 'Redfern' } })).id;
   });
@@ -58,27 +59,45 @@ describe('security checks (e2e)', () => {
 
   describe('access tokens', () => {
     it('accepts a token we sign ourselves with the app secret (so the refusals below are about one thing each)', async () => {
-      await me(jwt({ alg: 'HS256', typ: 'JWT' }, { ...fabClaims, iss: JWT_ISSUER, iat: now(), exp: now() + 60 }, secret)).expect(200);
+      await me(jwt({ alg: 'HS256', typ: 'JWT' }, { ...fabClaims, iss: JWT_ISSUER, aud: JWT_AUDIENCE, iat: now(), exp: now() + 60 }, secret)).expect(200);
+    });
+
+    it('refuses a correctly signed token without exp, without a session, or for a made-up user', async () => {
+      const base = { iss: JWT_ISSUER, aud: JWT_AUDIENCE, iat: now() };
+      await me(jwt({ alg: 'HS256', typ: 'JWT' }, { ...fabClaims, ...base }, secret)).expect(401);
+      await me(jwt({ alg: 'HS256' }, { sub: fabClaims.sub, ...base, exp: now() + 60 }, secret)).expect(401);
+      // Shop and roles in a token are ignored: an id nobody has, with a live session id, is refused…
+      const madeUp = { sub: '00000000-0000-4000-8000-000000000000', sid: fabClaims.sid, shopId: shop.shop.id, roles: ['admin'] };
+      const forged = jwt({ alg: 'HS256' }, { ...madeUp, ...base, exp: now() + 60 }, secret);
+      await testApp.http().get('/api/users').set('Authorization', `Bearer ${forged}`).expect(401);
+      // …and roles claimed in a token do not raise the caller's real ones.
+      const claimsAdmin = jwt({ alg: 'HS256' }, { ...fabClaims, roles: ['admin'], ...base, exp: now() + 60 }, secret);
+      await testApp.http().get('/api/users').set('Authorization', `Bearer ${claimsAdmin}`).expect(403);
     });
 
     it('refuses a token whose exp has passed', async () => {
-      const expired = jwt({ alg: 'HS256', typ: 'JWT' }, { ...fabClaims, iss: JWT_ISSUER, iat: now() - 120, exp: now() - 60 }, secret);
+      const expired = jwt({ alg: 'HS256', typ: 'JWT' }, { ...fabClaims, iss: JWT_ISSUER, aud: JWT_AUDIENCE, iat: now() - 120, exp: now() - 60 }, secret);
       const response = await me(expired).expect(401);
       expect(response.body).toEqual({ statusCode: 401, code: 'unauthorized', message: expect.any(String), issues: [] });
     });
 
     it('refuses a token with alg "none", with or without a signature part', async () => {
-      const claims = { ...fabClaims, iss: JWT_ISSUER, iat: now(), exp: now() + 60 };
+      const claims = { ...fabClaims, iss: JWT_ISSUER, aud: JWT_AUDIENCE, iat: now(), exp: now() + 60 };
       const unsigned = jwt({ alg: 'none', typ: 'JWT' }, claims);
       await me(unsigned).expect(401);
       await me(unsigned.slice(0, -1)).expect(401);
       await me(jwt({ alg: 'None' }, claims)).expect(401);
     });
 
-    it('refuses a token signed with another secret, another issuer or another algorithm', async () => {
-      const claims = { ...fabClaims, iss: JWT_ISSUER, iat: now(), exp: now() + 60 };
+    it('refuses a token signed with another secret, another issuer, audience or algorithm', async () => {
+      const claims = { ...fabClaims, iss: JWT_ISSUER, aud: JWT_AUDIENCE, iat: now(), exp: now() + 60 };
       await me(jwt({ alg: 'HS256' }, claims, 'some-other-secret-of-length')).expect(401);
+      // The development default earlier versions shipped with is just another secret now.
+      await me(jwt({ alg: 'HS256' }, claims, 'linesmith-dev-only-secret-change-me')).expect(401);
       await me(jwt({ alg: 'HS256' }, { ...claims, iss: 'someone-else' }, secret)).expect(401);
+      await me(jwt({ alg: 'HS256' }, { ...claims, aud: 'another-api' }, secret)).expect(401);
+      const { aud: _aud, ...noAudience } = claims;
+      await me(jwt({ alg: 'HS256' }, noAudience, secret)).expect(401);
       const hs512 = `${base64url(JSON.stringify({ alg: 'HS512' }))}.${base64url(JSON.stringify(claims))}`;
       await me(`${hs512}.${createHmac('sha512', secret).update(hs512).digest('base64url')}`).expect(401);
     });

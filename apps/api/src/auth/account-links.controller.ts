@@ -1,13 +1,13 @@
-import { Body, Controller, HttpCode, Post, Res, UseGuards } from '@nestjs/common';
+import { Body, Controller, HttpCode, Post, Req, Res } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { ThrottlerGuard } from '@nestjs/throttler';
-import type { Response } from 'express';
+import type { Request, Response } from 'express';
 import { AppConfigService } from '../config/app-config.service.js';
 import { AccountLinksService } from './account-links.service.js';
+import { LimitPerClient } from './client-rate-limit.guard.js';
 import { Public } from './decorators/public.decorator.js';
 import { RequestResetDto, TokenPasswordDto } from './dto/account-link.schemas.js';
 import type { SessionResponse } from './dto/auth.schemas.js';
-import { setRefreshCookie } from './refresh-cookie.js';
+import { secureCookies, setRefreshCookie } from './refresh-cookie.js';
 
 /** The public ends of the e-mailed links: accept an invitation, reset a password. */
 @ApiTags('auth')
@@ -22,23 +22,23 @@ export class AccountLinksController {
   /** Sets the password and signs in: the same answer as login. */
   @Post('accept-invite')
   @HttpCode(200)
-  @UseGuards(ThrottlerGuard)
-  async acceptInvite(@Body() body: TokenPasswordDto, @Res({ passthrough: true }) response: Response): Promise<SessionResponse> {
+  @LimitPerClient('account-link')
+  async acceptInvite(@Body() body: TokenPasswordDto, @Req() request: Request, @Res({ passthrough: true }) response: Response): Promise<SessionResponse> {
     const { refresh, ...session } = await this.links.acceptInvite(body.token, body.password);
-    setRefreshCookie(response, refresh.token, refresh.expiresAt, this.config.get('COOKIE_SECURE'));
+    setRefreshCookie(response, refresh.token, refresh.expiresAt, secureCookies(request, this.config.get('COOKIE_SECURE')));
     return session;
   }
 
   @Post('request-reset')
   @HttpCode(202)
-  @UseGuards(ThrottlerGuard)
+  @LimitPerClient('request-reset')
   async requestReset(@Body() body: RequestResetDto): Promise<void> {
     await this.links.requestReset(body.email);
   }
 
   @Post('reset-password')
   @HttpCode(204)
-  @UseGuards(ThrottlerGuard)
+  @LimitPerClient('account-link')
   async resetPassword(@Body() body: TokenPasswordDto): Promise<void> {
     await this.links.resetPassword(body.token, body.password);
   }

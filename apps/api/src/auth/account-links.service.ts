@@ -12,9 +12,12 @@ import type { UserDto } from '../users/dto/user.dto.js';
 import { toUserDto } from '../users/user.mapper.js';
 import { AuthService, type Session } from './auth.service.js';
 import type { InviteUserInput } from './dto/account-link.schemas.js';
+import { endAllSessions } from './session-check.service.js';
 import { UserTokensService } from './user-tokens.service.js';
 
 const HOUR_MS = 60 * 60 * 1000;
+/** Every reset request is answered after this long, so timing does not tell which addresses have accounts. */
+export const RESET_ANSWER_MS = 400;
 
 /** Invitations and password resets: one-time links sent by e-mail. */
 @Injectable()
@@ -66,6 +69,15 @@ export class AccountLinksService {
    * sends at most RESET_RATE_LIMIT links per address and hour.
    */
   async requestReset(email: string): Promise<void> {
+    // Answer after the same fixed time whether or not the address has an account (and however slow
+    // the mail server is): the work goes on in the background if it takes longer.
+    const floor = new Promise((resolve) => setTimeout(resolve, RESET_ANSWER_MS));
+    const work = this.sendResetLink(email).catch((error: unknown) => this.logger.warn(`reset request failed: ${(error as Error).message}`));
+    await Promise.race([work, floor]);
+    await floor;
+  }
+
+  private async sendResetLink(email: string): Promise<void> {
     const user = await this.users.findForSignIn(email);
     if (!user?.active) return;
     const since = new Date(Date.now() - HOUR_MS);
@@ -104,6 +116,8 @@ export class AccountLinksService {
       const user = await repo.findOneBy({ id: userId, active: true });
       if (!user) throw new ValidationError([{ path: 'token', message: 'This account is not active.' }]);
       await repo.update({ id: userId }, { passwordHash });
+      // A new password ends every session opened with the old one (a reset is often a response to theft).
+      await endAllSessions(manager, userId);
       return user;
     });
   }

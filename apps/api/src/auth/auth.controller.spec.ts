@@ -1,8 +1,7 @@
-import { GUARDS_METADATA } from '@nestjs/common/constants.js';
 import { Reflector } from '@nestjs/core';
-import { ThrottlerGuard } from '@nestjs/throttler';
 import { UsersController } from '../users/users.controller.js';
 import { HealthController } from '../health/health.controller.js';
+import { AccountLinksController } from './account-links.controller.js';
 import { AuthController } from './auth.controller.js';
 import { IS_PUBLIC_KEY } from './decorators/public.decorator.js';
 import { ROLES_KEY } from './decorators/roles.decorator.js';
@@ -20,9 +19,13 @@ describe('auth wiring of controllers', () => {
     expect(reflector.get(IS_PUBLIC_KEY, UsersController)).toBeUndefined();
   });
 
-  it('throttles only the login handler', () => {
-    expect(Reflect.getMetadata(GUARDS_METADATA, AuthController.prototype.login)).toEqual([ThrottlerGuard]);
-    expect(Reflect.getMetadata(GUARDS_METADATA, AuthController.prototype.refresh)).toBeUndefined();
+  it('limits sign-in and the e-mailed-link routes per client, not refresh', () => {
+    const limitOf = (handler: object) => Reflect.getMetadata('linesmith:client-limit', handler) as string | undefined;
+    expect(limitOf(AuthController.prototype.login)).toBe('login');
+    expect(limitOf(AuthController.prototype.refresh)).toBeUndefined();
+    expect(limitOf(AccountLinksController.prototype.requestReset)).toBe('request-reset');
+    expect(limitOf(AccountLinksController.prototype.resetPassword)).toBe('account-link');
+    expect(limitOf(AccountLinksController.prototype.acceptInvite)).toBe('account-link');
   });
 
   it('keeps user administration to admins', () => {

@@ -1,12 +1,12 @@
-import { Body, Controller, HttpCode, Post, Req, Res, UseGuards } from '@nestjs/common';
+import { Body, Controller, HttpCode, Post, Req, Res } from '@nestjs/common';
 import { ApiTags } from '@nestjs/swagger';
-import { ThrottlerGuard } from '@nestjs/throttler';
 import type { Request, Response } from 'express';
 import { AppConfigService } from '../config/app-config.service.js';
 import { AuthService, type Session } from './auth.service.js';
+import { LimitPerClient } from './client-rate-limit.guard.js';
 import { Public } from './decorators/public.decorator.js';
 import { LoginDto, type SessionResponse } from './dto/auth.schemas.js';
-import { clearRefreshCookie, readRefreshCookie, setRefreshCookie } from './refresh-cookie.js';
+import { clearRefreshCookie, readRefreshCookie, secureCookies, setRefreshCookie } from './refresh-cookie.js';
 
 @ApiTags('auth')
 @Public()
@@ -19,28 +19,28 @@ export class AuthController {
 
   @Post('login')
   @HttpCode(200)
-  @UseGuards(ThrottlerGuard)
-  async login(@Body() body: LoginDto, @Res({ passthrough: true }) response: Response): Promise<SessionResponse> {
-    return this.respond(response, await this.auth.login(body.email, body.password));
+  @LimitPerClient('login')
+  async login(@Body() body: LoginDto, @Req() request: Request, @Res({ passthrough: true }) response: Response): Promise<SessionResponse> {
+    return this.respond(request, response, await this.auth.login(body.email, body.password));
   }
 
   @Post('refresh')
   @HttpCode(200)
   async refresh(@Req() request: Request, @Res({ passthrough: true }) response: Response): Promise<SessionResponse> {
-    return this.respond(response, await this.auth.refresh(readRefreshCookie(request)));
+    return this.respond(request, response, await this.auth.refresh(readRefreshCookie(request)));
   }
 
   @Post('logout')
   @HttpCode(204)
   async logout(@Req() request: Request, @Res({ passthrough: true }) response: Response): Promise<void> {
     await this.auth.logout(readRefreshCookie(request));
-    clearRefreshCookie(response, this.config.get('COOKIE_SECURE'));
+    clearRefreshCookie(response, secureCookies(request, this.config.get('COOKIE_SECURE')));
   }
 
   /** Sets the rotated cookie and answers the contract's session body (without the refresh token). */
-  private respond(response: Response, session: Session): SessionResponse {
+  private respond(request: Request, response: Response, session: Session): SessionResponse {
     const { refresh, ...body } = session;
-    setRefreshCookie(response, refresh.token, refresh.expiresAt, this.config.get('COOKIE_SECURE'));
+    setRefreshCookie(response, refresh.token, refresh.expiresAt, secureCookies(request, this.config.get('COOKIE_SECURE')));
     return body;
   }
 }

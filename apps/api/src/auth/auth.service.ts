@@ -9,6 +9,7 @@ import type { UserEntity } from '../users/user.entity.js';
 import { UsersService } from '../users/users.service.js';
 import type { AccessTokenClaims } from './auth-user.js';
 import type { Me, SessionResponse } from './dto/auth.schemas.js';
+import { AbuseLimitsService } from './abuse-limits.service.js';
 import { RefreshTokensService, type IssuedRefreshToken } from './refresh-tokens.service.js';
 
 export interface Session extends SessionResponse {
@@ -23,10 +24,13 @@ export class AuthService {
     private readonly refreshTokens: RefreshTokensService,
     private readonly jwt: JwtService,
     private readonly config: AppConfigService,
+    private readonly limits: AbuseLimitsService,
   ) {}
 
   /** Wrong e-mail, wrong password, no password yet and deactivated all answer the same. */
   async login(email: string, password: string): Promise<Session> {
+    // Counted before the password is checked, for known and unknown addresses alike.
+    await this.limits.consumeAccount(email);
     const user = await this.users.findForSignIn(email);
     if (!user?.passwordHash) {
       await burnPasswordCheck(password);
@@ -34,6 +38,7 @@ export class AuthService {
     }
     const passwordOk = await verifyPassword(user.passwordHash, password);
     if (!passwordOk || !user.active) throw this.invalidCredentials();
+    await this.limits.clearAccount(email);
     return this.startSession(user, await this.refreshTokens.issue(user.id));
   }
 
@@ -64,7 +69,7 @@ export class AuthService {
   }
 
   private async startSession(user: UserEntity, refresh: IssuedRefreshToken): Promise<Session> {
-    const claims: AccessTokenClaims = { sub: user.id, shopId: user.shopId, roles: user.roles };
+    const claims: AccessTokenClaims = { sub: user.id, sid: refresh.familyId };
     const accessToken = await this.jwt.signAsync(claims);
     return { accessToken, expiresInSec: this.config.get('JWT_ACCESS_TTL_SEC'), user: await this.toMe(user), refresh };
   }

@@ -8,6 +8,11 @@ function baseOptions(secure: boolean): CookieOptions {
   return { httpOnly: true, sameSite: 'strict', path: COOKIE_PATH, secure };
 }
 
+/** Secure when configured, and always when the request came over HTTPS (directly or via a trusted proxy). */
+export function secureCookies(request: Request, configured: boolean): boolean {
+  return configured || request.secure;
+}
+
 export function setRefreshCookie(response: Response, token: string, expiresAt: Date, secure: boolean): void {
   response.cookie(REFRESH_COOKIE, token, { ...baseOptions(secure), expires: expiresAt });
 }

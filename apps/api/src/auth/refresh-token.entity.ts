@@ -45,6 +45,13 @@ export class RefreshTokenEntity {
   @Column({ name: 'replaced_by', type: 'uuid', nullable: true })
   replacedBy: string | null;
 
+  /**
+   * The successor token, encrypted with a key only the holder of this token can derive, kept so a
+   * second tab refreshing within the grace window receives the same successor.
+   */
+  @Column({ name: 'successor_sealed', type: 'text', nullable: true, select: false })
+  successorSealed: string | null;
+
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;
 

@@ -17,6 +17,8 @@ import { AuditEventEntity } from '../audit/audit-event.entity.js';
 import { NotificationEntity } from '../notifications/notification.entity.js';
 import { ReviewAcknowledgementEntity } from '../reviews/review-acknowledgement.entity.js';
 import { ReviewEntity } from '../reviews/review.entity.js';
+import { OrderReceiptEntity } from '../orders/order-receipt.entity.js';
+import { OrderSourceEntity } from '../orders/order-source.entity.js';
 
 /** Every entity, listed explicitly (no globs) so the same list works from TS sources and from dist. */
 export const ENTITIES = [
@@ -35,6 +37,8 @@ export const ENTITIES = [
   StockAdjustmentEntity,
   OrderEntity,
   OrderLineEntity,
+  OrderSourceEntity,
+  OrderReceiptEntity,
   ReviewEntity,
   ReviewAcknowledgementEntity,
   AuditEventEntity,

@@ -1,4 +1,4 @@
-import { Body, Controller, Get, HttpCode, Param, Post, Res } from '@nestjs/common';
+import { Body, Controller, Get, Headers, HttpCode, Param, Post, Res } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import type { Response } from 'express';
 import type { AuthUser } from '../auth/auth-user.js';
@@ -6,7 +6,8 @@ import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
 import { Roles } from '../auth/decorators/roles.decorator.js';
 import { ParseIdPipe } from '../common/validation/parse-id.pipe.js';
 import { sendWorkbook } from '../spreadsheets/spreadsheet.js';
-import { DraftOrdersDto, ReceiveOrderDto, type DraftOrdersResult, type OrderDto } from './dto/order.schemas.js';
+import { parseWithSchema } from '../common/validation/zod-validation.pipe.js';
+import { DraftOrdersDto, idempotencyKeySchema, ReceiveOrderDto, type DraftOrdersResult, type OrderDto } from './dto/order.schemas.js';
 import { OrdersService } from './orders.service.js';
 
 @ApiTags('orders')
@@ -45,7 +46,13 @@ export class OrdersController {
 
   @Post(':id/receive')
   @HttpCode(200)
-  receive(@CurrentUser() caller: AuthUser, @Param('id', ParseIdPipe) id: string, @Body() body: ReceiveOrderDto): Promise<OrderDto> {
-    return this.orders.receive(caller.shopId, caller.userId, id, body);
+  receive(
+    @CurrentUser() caller: AuthUser,
+    @Param('id', ParseIdPipe) id: string,
+    @Body() body: ReceiveOrderDto,
+    @Headers('idempotency-key') idempotencyKey: string | undefined,
+  ): Promise<OrderDto> {
+    const key = parseWithSchema(idempotencyKeySchema, idempotencyKey, 'Idempotency-Key');
+    return this.orders.receive(caller.shopId, caller.userId, id, body, key);
   }
 }

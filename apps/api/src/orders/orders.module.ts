@@ -11,12 +11,14 @@ import { StockModule } from '../stock/stock.module.js';
 import { SupplierEntity } from '../suppliers/supplier.entity.js';
 import { OrderLineEntity } from './order-line.entity.js';
 import { OrderEntity } from './order.entity.js';
+import { OrderReceiptEntity } from './order-receipt.entity.js';
+import { OrderSourceEntity } from './order-source.entity.js';
 import { OrdersController } from './orders.controller.js';
 import { OrdersService } from './orders.service.js';
 
 @Module({
   imports: [
-    TypeOrmModule.forFeature([OrderEntity, OrderLineEntity, CircuitEntity, SupplierEntity]),
+    TypeOrmModule.forFeature([OrderEntity, OrderLineEntity, OrderSourceEntity, OrderReceiptEntity, CircuitEntity, SupplierEntity]),
     CircuitsModule,
     RulesModule,
     PartsModule,

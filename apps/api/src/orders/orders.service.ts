@@ -1,9 +1,11 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { buildOrderSheets, saleUnitLabel, type BomRow } from '@linesmith/routing';
-import { In, type DataSource, type Repository } from 'typeorm';
+import { createHash } from 'node:crypto';
+import { In, MoreThan, type DataSource, type EntityManager, type Repository } from 'typeorm';
 import { AuditService } from '../audit/audit.service.js';
 import { ConflictError, NotFoundError, ValidationError } from '../common/errors/app-error.js';
+import { isUniqueViolation } from '../common/errors/unique-violation.js';
 import { CircuitRevisionsService } from '../circuits/circuit-revisions.service.js';
 import { CircuitEntity } from '../circuits/circuit.entity.js';
 import { MailService } from '../mail/mail.service.js';
@@ -18,9 +20,19 @@ import type { DraftOrdersResult, OrderDto, OrderSupplierDto, ReceiveOrderInput }
 import { OrderLineEntity } from './order-line.entity.js';
 import { orderSheetWorkbook } from './order-sheet.workbook.js';
 import { OrderEntity } from './order.entity.js';
+import { OrderReceiptEntity } from './order-receipt.entity.js';
+import { NO_SUPPLIER_KEY, OrderSourceEntity } from './order-source.entity.js';
 import { toOrderDto } from './order.mapper.js';
 
 const EPSILON = 1e-9;
+/** Without an idempotency key, the same receipt of the same order within this window is a double submit. */
+const UNKEYED_REPEAT_WINDOW_MS = 10_000;
+
+/** Order-independent digest of a receipt's lines. */
+function receiptLinesHash(input: ReceiveOrderInput): string {
+  const canonical = [...input.lines].map((line) => `${line.orderLineId}=${line.quantity}`).sort().join(';');
+  return createHash('sha256').update(canonical).digest('hex');
+}
 
 function supplierRef(supplier: SupplierEntity): OrderSupplierDto {
   return { id: supplier.id, name: supplier.name, email: supplier.email, accountNumber: supplier.accountNumber };
@@ -68,6 +80,7 @@ export class OrdersService {
       );
     }
     const bomRows: BomRow[] = [];
+    const sources: Array<{ circuit: CircuitEntity; revisionNumber: number }> = [];
     for (const circuit of circuits) {
       const approved = approvedRevisionNumber(await this.revisions.list(shopId, circuit.id));
       if (approved === undefined) throw new ConflictError(`“${circuit.name}” has no signed-off revision to order from.`);
@@ -75,55 +88,99 @@ export class OrdersService {
       const stored = await this.revisions.signedOffEvaluation(shopId, circuit.id, approved);
       const evaluation = stored ?? (await this.rules.evaluate(shopId, (await this.revisions.get(shopId, circuit.id, approved)).document));
       bomRows.push(...evaluation.bom.rows);
+      sources.push({ circuit, revisionNumber: approved });
     }
     const [parts, shop] = await Promise.all([this.catalogue.partsOf(shopId), this.shops.getOwnShop(shopId)]);
     const stockByPart = new Map(parts.map((part) => [part.id, part.stockOnHand]));
     const result = buildOrderSheets(bomRows, parts, stockByPart, shop.taxRatePercent);
+    const extras = { coveredByStock: result.coveredByStock, unorderable: result.unorderable };
 
-    const saved = await this.dataSource.transaction(async (manager) => {
-      const repo = manager.getRepository(OrderEntity);
-      const ids: string[] = [];
-      for (const sheet of result.sheets) {
-        const order = await repo.save(
-          repo.create({
-            shopId,
-            supplierId: sheet.supplierId,
-            status: 'draft',
-            circuitIds: circuits.map((circuit) => circuit.id),
-            taxRatePercent: shop.taxRatePercent,
-            subtotalCents: sheet.subtotalCents,
-            taxCents: sheet.taxCents,
-            totalCents: sheet.totalCents,
-            createdBy: actorId,
-            sentAt: null,
-          }),
-        );
-        const lines = manager.getRepository(OrderLineEntity);
-        await lines.save(
-          sheet.lines.map((line, position) =>
-            lines.create({
-              orderId: order.id,
-              position,
-              partId: line.partId,
-              description: line.description,
-              supplierPartNumber: line.supplierPartNumber,
-              saleUnit: saleUnitLabel(line.saleUnit),
-              quantity: line.quantity,
-              unitPriceCents: line.unitPriceCents,
-              lineTotalCents: line.lineTotalCents,
-              receivedQuantity: 0,
+    const earlier = await this.ordersDraftedFrom(shopId, sources);
+    if (earlier) return { orders: earlier, ...extras, reused: true };
+    let saved: string[];
+    try {
+      saved = await this.dataSource.transaction(async (manager) => {
+        const repo = manager.getRepository(OrderEntity);
+        const ids: string[] = [];
+        for (const sheet of result.sheets) {
+          const order = await repo.save(
+            repo.create({
+              shopId,
+              supplierId: sheet.supplierId,
+              status: 'draft',
+              circuitIds: circuits.map((circuit) => circuit.id),
+              taxRatePercent: shop.taxRatePercent,
+              subtotalCents: sheet.subtotalCents,
+              taxCents: sheet.taxCents,
+              totalCents: sheet.totalCents,
+              createdBy: actorId,
+              sentAt: null,
             }),
-          ),
-        );
-        ids.push(order.id);
-      }
-      return ids;
+          );
+          const lines = manager.getRepository(OrderLineEntity);
+          await lines.save(
+            sheet.lines.map((line, position) =>
+              lines.create({
+                orderId: order.id,
+                position,
+                partId: line.partId,
+                description: line.description,
+                supplierPartNumber: line.supplierPartNumber,
+                saleUnit: saleUnitLabel(line.saleUnit),
+                quantity: line.quantity,
+                unitPriceCents: line.unitPriceCents,
+                lineTotalCents: line.lineTotalCents,
+                receivedQuantity: 0,
+              }),
+            ),
+          );
+          await manager.getRepository(OrderSourceEntity).insert(
+            sources.map(({ circuit, revisionNumber }) => ({
+              orderId: order.id,
+              shopId,
+              circuitId: circuit.id,
+              revisionNumber,
+              supplierKey: sheet.supplierId ?? NO_SUPPLIER_KEY,
+            })),
+          );
+          ids.push(order.id);
+        }
+        return ids;
+      });
+    } catch (error) {
+      // A concurrent request drafted the same revisions first: answer its orders.
+      if (!isUniqueViolation(error)) throw error;
+      const winner = await this.ordersDraftedFrom(shopId, sources);
+      if (!winner) throw error;
+      return { orders: winner, ...extras, reused: true };
+    }
+    return { orders: await Promise.all(saved.map((id) => this.get(shopId, id))), ...extras, reused: false };
+  }
+
+  /**
+   * The orders already drafted from exactly these circuit revisions (a repeated or concurrent
+   * submit), or null when none is. Orders that cover only some of them, or more, are a 409 naming
+   * the circuits already on order.
+   */
+  private async ordersDraftedFrom(shopId: string, sources: Array<{ circuit: CircuitEntity; revisionNumber: number }>): Promise<OrderDto[] | null> {
+    const sourceRepo = this.dataSource.getRepository(OrderSourceEntity);
+    const hits = await sourceRepo.find({
+      where: sources.map(({ circuit, revisionNumber }) => ({ shopId, circuitId: circuit.id, revisionNumber })),
     });
-    return {
-      orders: await Promise.all(saved.map((id) => this.get(shopId, id))),
-      coveredByStock: result.coveredByStock,
-      unorderable: result.unorderable,
-    };
+    if (!hits.length) return null;
+    const orderIds = [...new Set(hits.map((hit) => hit.orderId))];
+    const covered = await sourceRepo.findBy({ shopId, orderId: In(orderIds) });
+    const requested = new Set(sources.map(({ circuit }) => circuit.id));
+    const coveredIds = new Set(covered.map((row) => row.circuitId));
+    const same = coveredIds.size === requested.size && [...requested].every((id) => coveredIds.has(id));
+    if (!same) {
+      const names = sources.filter(({ circuit }) => coveredIds.has(circuit.id)).map(({ circuit }) => `“${circuit.name}”`);
+      throw new ConflictError(
+        `${names.join(', ')} ${names.length === 1 ? 'is' : 'are'} already on an order for this signed-off revision. ` +
+          'Send or use that order, and order the other circuits on their own.',
+      );
+    }
+    return Promise.all(orderIds.map((id) => this.get(shopId, id)));
   }
 
   async list(shopId: string): Promise<OrderDto[]> {
@@ -241,15 +298,18 @@ export class OrdersService {
   }
 
   /** Books delivered quantities into stock in one transaction; the order becomes partially or fully received. */
-  async receive(shopId: string, actorId: string, orderId: string, input: ReceiveOrderInput): Promise<OrderDto> {
+  async receive(shopId: string, actorId: string, orderId: string, input: ReceiveOrderInput, idempotencyKey?: string): Promise<OrderDto> {
     await this.dataSource.transaction(async (manager) => {
       const repo = manager.getRepository(OrderEntity);
+      // The order row lock serialises every receipt of this order, so the repeat check below is exact.
       const order = await repo
         .createQueryBuilder('o')
         .where('o.id = :orderId AND o.shop_id = :shopId', { orderId, shopId })
         .setLock('pessimistic_write')
         .getOne();
       if (!order) throw new NotFoundError('The order');
+      const linesHash = receiptLinesHash(input);
+      if (await this.isRepeatedReceipt(manager, orderId, linesHash, idempotencyKey)) return;
       if (order.status === 'draft' || order.status === 'received') {
         throw new ConflictError(order.status === 'draft' ? 'Send the order before booking deliveries.' : 'This order is fully received.');
       }
@@ -282,11 +342,37 @@ export class OrdersService {
         }
       }
       for (const [lineId, quantity] of received) await lineRepo.update({ id: lineId }, { receivedQuantity: quantity });
+      await manager.getRepository(OrderReceiptEntity).insert({
+        shopId,
+        orderId,
+        idempotencyKey: idempotencyKey ?? null,
+        linesHash,
+        lines: input.lines,
+        createdBy: actorId,
+      });
       const complete = lines.every((line) => (received.get(line.id) ?? line.receivedQuantity) >= line.quantity - EPSILON);
       await repo.update({ id: orderId }, { status: complete ? 'received' : 'partially-received' });
     });
     this.catalogue.invalidate(shopId);
     return this.get(shopId, orderId);
+  }
+
+  /**
+   * A receipt already booked under this idempotency key (the same lines: a retry or double click),
+   * or, without a key, the same lines booked in the last few seconds. A key reused for other lines
+   * is a client mistake and answers 409.
+   */
+  private async isRepeatedReceipt(manager: EntityManager, orderId: string, linesHash: string, idempotencyKey?: string): Promise<boolean> {
+    const receipts = manager.getRepository(OrderReceiptEntity);
+    if (idempotencyKey) {
+      const earlier = await receipts.findOneBy({ orderId, idempotencyKey });
+      if (!earlier) return false;
+      if (earlier.linesHash !== linesHash) {
+        throw new ConflictError('This Idempotency-Key was already used for a different receipt of this order. Send a new key for a new receipt.');
+      }
+      return true;
+    }
+    return receipts.existsBy({ orderId, linesHash, createdAt: MoreThan(new Date(Date.now() - UNKEYED_REPEAT_WINDOW_MS)) });
   }
 
   private async supplierRefs(shopId: string): Promise<Map<string, OrderSupplierDto>> {

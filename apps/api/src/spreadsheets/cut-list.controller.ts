@@ -8,9 +8,10 @@ import { ParseIdPipe } from '../common/validation/parse-id.pipe.js';
 import { zodDto } from '../common/validation/zod-dto.js';
 import { CutListService } from './cut-list.service.js';
 import { sendWorkbook } from './spreadsheet.js';
+import { revisionNumberSchema } from '../common/validation/numbers.js';
 
 export const cutListQuerySchema = z.object({
-  revision: z.coerce.number().int().min(1).optional(),
+  revision: revisionNumberSchema.optional(),
   draft: z
     .enum(['1', '0', 'true', 'false'])
     .transform((value) => value === '1' || value === 'true')

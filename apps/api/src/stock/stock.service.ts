@@ -7,6 +7,7 @@ import { ShopCatalogueService } from '../parts/shop-catalogue.service.js';
 import { UserEntity } from '../users/user.entity.js';
 import type { NewStockAdjustment, StockAdjustmentDto, StockAdjustmentResult } from './dto/stock-adjustment.schemas.js';
 import { StockAdjustmentEntity } from './stock-adjustment.entity.js';
+import { MAX_STOCK, roundQuantity } from '../common/validation/numbers.js';
 
 function toStockAdjustmentDto(row: StockAdjustmentEntity, actorName?: string): StockAdjustmentDto {
   return {
@@ -45,9 +46,12 @@ export class StockService {
     const parts = manager.getRepository(PartEntity);
     const part = await parts.createQueryBuilder('part').where('part.id = :partId AND part.shop_id = :shopId', { partId, shopId }).setLock('pessimistic_write').getOne();
     if (!part) throw new NotFoundError('The part');
-    const stockOnHand = Math.round((part.stockOnHand + input.delta) * 1000) / 1000;
+    const stockOnHand = roundQuantity(part.stockOnHand + input.delta);
     if (stockOnHand < 0) {
       throw new ValidationError([{ path: 'delta', message: `Only ${part.stockOnHand} on hand; stock cannot go below zero.` }]);
+    }
+    if (stockOnHand > MAX_STOCK) {
+      throw new ValidationError([{ path: 'delta', message: `Stock on hand cannot exceed ${MAX_STOCK}; ${part.stockOnHand} is on hand now.` }]);
     }
     await parts.update({ id: partId, shopId }, { stockOnHand });
     const adjustments = manager.getRepository(StockAdjustmentEntity);

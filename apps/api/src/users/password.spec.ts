@@ -25,4 +25,25 @@ describe('password hashing', () => {
     expect(passwordSchema.safeParse('123456789').success).toBe(false);
     expect(passwordSchema.safeParse('linesmith-demo').success).toBe(true);
   });
+
+  it.each([
+    // Ten characters or more, yet on the common-password lists or trivially patterned
+    // (OWASP Authentication Cheat Sheet, "Password Complexity": block common and breached passwords).
+    ['ten spaces', '          '],
+    ['a common password', 'password123'],
+    ['a keyboard row', 'qwertyuiop'],
+    ['a digit run', '1234567890'],
+    ['one repeated letter', 'aaaaaaaaaa'],
+    ['an alphabet run', 'abcdefghij'],
+    ['a common word with digits and a symbol', 'Password1!'],
+  ])('refuses %s', (_label, password) => {
+    const result = passwordSchema.safeParse(password);
+    expect(result.success).toBe(false);
+    expect(result.error?.issues[0]?.message).toMatch(/only spaces|too common or too easy/);
+  });
+
+  it('accepts unrelated words', () => {
+    expect(passwordSchema.safeParse('correct-horse-battery').success).toBe(true);
+    expect(passwordSchema.safeParse('gasket lantern ferry').success).toBe(true);
+  });
 });

@@ -33,6 +33,14 @@ describe('UsersService', () => {
     findOneBy: jest.fn(),
     update: jest.fn(),
     findAndCount: jest.fn(),
+    // Updates run in a transaction that may also end the user's sessions.
+    manager: {
+      transaction: (work: (manager: unknown) => Promise<unknown>) => work(txManager),
+    },
+  };
+  const txManager = {
+    update: (_entity: unknown, where: unknown, fields: unknown) => repo.update(where, fields),
+    query: jest.fn(),
   };
 
   beforeEach(async () => {
@@ -90,6 +98,8 @@ describe('UsersService', () => {
       const user = await service.updateUser(SHOP, ADMIN_ID, OTHER_ID, { version: 3, displayName: 'Renamed' });
       expect(repo.findOneBy).toHaveBeenCalledWith({ id: OTHER_ID, shopId: SHOP });
       expect(repo.update).toHaveBeenCalledWith({ id: OTHER_ID, shopId: SHOP, version: 3 }, { displayName: 'Renamed' });
+      // A rename keeps the user signed in.
+      expect(txManager.query).not.toHaveBeenCalled();
       expect(user.version).toBe(4);
     });
 
@@ -126,6 +136,8 @@ describe('UsersService', () => {
       repo.update.mockResolvedValue({ affected: 1 });
       await service.updateUser(SHOP, ADMIN_ID, ADMIN_ID, { version: 3, roles: ['admin', 'reviewer'] });
       expect(repo.update).toHaveBeenCalledWith({ id: ADMIN_ID, shopId: SHOP, version: 3 }, { roles: ['admin', 'reviewer'] });
+      // A role change ends the user's sessions in the same transaction.
+      expect(txManager.query).toHaveBeenCalledWith(expect.stringMatching(/UPDATE refresh_tokens SET revoked_at/), [ADMIN_ID]);
     });
 
     it('answers 404 for a user of another shop', async () => {

@@ -4,6 +4,7 @@ import { ArrayContains, ILike, type FindOptionsWhere, type Repository } from 'ty
 import { ConflictError, NotFoundError, ValidationError } from '../common/errors/app-error.js';
 import type { ListUsersQuery } from './dto/user-input.schemas.js';
 import type { UserDto } from './dto/user.dto.js';
+import { endAllSessions } from '../auth/session-check.service.js';
 import { hashPassword } from './password.js';
 import type { Role } from './role.js';
 import { UserEntity } from './user.entity.js';
@@ -35,6 +36,10 @@ export interface Page<T> {
 export type UserWithPassword = UserEntity & { passwordHash: string | null };
 
 const PG_UNIQUE_VIOLATION = '23505';
+
+function sameRoles(a: Role[], b: Role[]): boolean {
+  return a.length === b.length && a.every((role) => b.includes(role));
+}
 
 function escapeLike(text: string): string {
   return text.replace(/[\\%_]/g, (char) => `\\${char}`);
@@ -103,15 +108,16 @@ export class UsersService {
     const updates = Object.fromEntries(Object.entries(fields).filter(([, value]) => value !== undefined));
     if (Object.keys(updates).length === 0) return user;
 
-    const result = await this.users.update({ id: userId, shopId, version }, updates);
-    if (!result.affected) throw this.staleVersion(await this.getOwn(shopId, userId));
+    const rolesChanged = changes.roles !== undefined && !sameRoles(changes.roles, user.roles);
+    const deactivated = changes.active === false && user.active;
+    const affected = await this.users.manager.transaction(async (manager) => {
+      const result = await manager.update(UserEntity, { id: userId, shopId, version }, updates);
+      // Tokens issued under the old roles or while active stop working on the next request.
+      if (result.affected && (rolesChanged || deactivated)) await endAllSessions(manager, userId);
+      return result.affected;
+    });
+    if (!affected) throw this.staleVersion(await this.getOwn(shopId, userId));
     return this.getOwn(shopId, userId);
-  }
-
-  /** For invitations and password resets (later): sets or replaces the user's password. */
-  async setPassword(shopId: string, userId: string, password: string): Promise<void> {
-    await this.getOwn(shopId, userId);
-    await this.users.update({ id: userId, shopId }, { passwordHash: await hashPassword(password) });
   }
 
   /** Sign-in looks users up by e-mail across shops: the e-mail is unique system-wide. */

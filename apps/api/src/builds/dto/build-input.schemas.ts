@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { zodDto } from '../../common/validation/zod-dto.js';
 import { buildStatusSchema } from '../build-status.js';
+import { versionSchema, pageSchema } from '../../common/validation/numbers.js';
 
 const text = (max: number) => z.string().trim().max(max, `Use at most ${max} characters.`);
 
@@ -36,7 +37,7 @@ export class CreateBuildDto extends zodDto(createBuildSchema) {}
 export type CreateBuildInput = z.output<typeof createBuildSchema>;
 
 export const updateBuildSchema = z.object({
-  version: z.number().int().positive(),
+  version: versionSchema,
   vehicle: vehicleSchema.optional(),
   customer: customerSchema.optional(),
   notes: notesSchema.optional(),
@@ -59,7 +60,7 @@ export const listBuildsQuerySchema = z.object({
   sort: z.enum(BUILD_SORTS).default('updatedAt'),
   /** Defaults: newest first for dates, A to Z for the customer. */
   direction: z.enum(['asc', 'desc']).optional(),
-  page: z.coerce.number().int().min(1).default(1),
+  page: pageSchema,
   pageSize: z.coerce.number().int().min(1).max(200).default(50),
 });
 export class ListBuildsQueryDto extends zodDto(listBuildsQuerySchema) {}

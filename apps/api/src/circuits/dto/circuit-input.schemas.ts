@@ -1,6 +1,7 @@
 import { circuitKindSchema, circuitSettingsSchema } from '@linesmith/routing';
 import { z } from 'zod';
 import { zodDto } from '../../common/validation/zod-dto.js';
+import { versionSchema, revisionNumberSchema } from '../../common/validation/numbers.js';
 
 const nameSchema = z.string().trim().min(1, 'Enter a name.').max(120);
 const { fluid, maxPressurePsi, maxTempF } = circuitSettingsSchema.shape;
@@ -17,7 +18,7 @@ export class CreateCircuitDto extends zodDto(createCircuitSchema) {}
 export type CreateCircuitInput = z.output<typeof createCircuitSchema>;
 
 export const updateCircuitSchema = z.object({
-  version: z.number().int().positive(),
+  version: versionSchema,
   name: nameSchema.optional(),
   kind: circuitKindSchema.optional(),
   fluid: fluid.optional(),
@@ -32,4 +33,4 @@ export const createRevisionSchema = z.object({
 });
 export class CreateRevisionDto extends zodDto(createRevisionSchema) {}
 
-export const revisionNumberSchema = z.coerce.number().int().min(1);
+export { revisionNumberSchema };

@@ -1,5 +1,4 @@
 import { HttpException, NotFoundException } from '@nestjs/common';
-import { ThrottlerException } from '@nestjs/throttler';
 import { AllExceptionsFilter } from './all-exceptions.filter.js';
 import { ConflictError, NotFoundError, ValidationError } from './app-error.js';
 
@@ -25,14 +24,14 @@ describe('AllExceptionsFilter.toBody', () => {
     expect(filter.toBody(new NotFoundError('The user'))).toMatchObject({ statusCode: 404, code: 'not_found' });
   });
 
-  it("maps Nest's HTTP exceptions and the throttler's 429", () => {
+  it("maps Nest's HTTP exceptions, a 429 among them", () => {
     expect(filter.toBody(new NotFoundException('Cannot GET /api/x'))).toEqual({
       statusCode: 404,
       code: 'not_found',
       message: 'Cannot GET /api/x',
       issues: [],
     });
-    expect(filter.toBody(new ThrottlerException())).toMatchObject({ statusCode: 429, code: 'rate_limited' });
+    expect(filter.toBody(new HttpException('slow down', 429))).toMatchObject({ statusCode: 429, code: 'rate_limited' });
     expect(filter.toBody(new HttpException('teapot', 418))).toMatchObject({ statusCode: 418, code: 'bad_request' });
   });
 

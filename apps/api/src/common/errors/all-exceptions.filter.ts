@@ -1,6 +1,6 @@
 import { Catch, HttpException, Logger, type ArgumentsHost, type ExceptionFilter } from '@nestjs/common';
 import type { Response } from 'express';
-import { AppError, type ErrorBody } from './app-error.js';
+import { AppError, RateLimitedError, type ErrorBody } from './app-error.js';
 import { isDatabaseUnavailable } from './database-errors.js';
 import { ErrorCode, HTTP_STATUS_OF } from './error-code.js';
 
@@ -48,6 +48,7 @@ export class AllExceptionsFilter implements ExceptionFilter {
     const body = this.toBody(exception);
     const response = host.switchToHttp().getResponse<Response>();
     if (response.headersSent) return;
+    if (exception instanceof RateLimitedError) response.setHeader('Retry-After', String(exception.retryAfterSec));
     response.status(body.statusCode).json(body);
   }
 

@@ -68,3 +68,13 @@ export class UnauthorizedError extends AppError {
     super(ErrorCode.Unauthorized, message);
   }
 }
+
+export class RateLimitedError extends AppError {
+  constructor(
+    message: string,
+    /** Seconds until another attempt is allowed (sent as Retry-After). */
+    readonly retryAfterSec: number,
+  ) {
+    super(ErrorCode.RateLimited, message);
+  }
+}

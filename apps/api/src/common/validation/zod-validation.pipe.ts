@@ -8,9 +8,12 @@ export function toIssues(error: z.ZodError): ErrorIssue[] {
 }
 
 /** Parses with a zod schema; failures become 400 `validation_failed` with one issue per field. */
-export function parseWithSchema<S extends z.ZodType>(schema: S, value: unknown): z.output<S> {
+export function parseWithSchema<S extends z.ZodType>(schema: S, value: unknown, at?: string): z.output<S> {
   const result = schema.safeParse(value);
-  if (!result.success) throw new ValidationError(toIssues(result.error));
+  if (!result.success) {
+    const issues = toIssues(result.error);
+    throw new ValidationError(at ? issues.map((issue) => ({ ...issue, path: issue.path ? `${at}.${issue.path}` : at })) : issues);
+  }
   return result.data;
 }
 

@@ -5,6 +5,7 @@ import { CreateBuildsCircuitsUploads1796185917823 } from './1796185917823-create
 import { CreateOutboxTokensStockOrders1796186373635 } from './1796186373635-create-outbox-tokens-stock-orders.js';
 import { CreateReviewsAuditNotifications1796186679267 } from './1796186679267-create-reviews-audit-notifications.js';
 import { StoreApprovedEvaluation1796300000000 } from './1796300000000-store-approved-evaluation.js';
+import { TrustSessionsIdempotencyLimits1796400000000 } from './1796400000000-trust-sessions-idempotency-limits.js';
 
 /** Every migration in order of its timestamp; add new ones at the end. */
 export const MIGRATIONS = [
@@ -15,4 +16,5 @@ export const MIGRATIONS = [
   CreateOutboxTokensStockOrders1796186373635,
   CreateReviewsAuditNotifications1796186679267,
   StoreApprovedEvaluation1796300000000,
+  TrustSessionsIdempotencyLimits1796400000000,
 ];

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { zodDto } from '../../common/validation/zod-dto.js';
 import type { OrderStatus } from '../order-status.js';
+import { positiveQuantitySchema } from '../../common/validation/numbers.js';
 
 export const draftOrdersSchema = z.object({
   circuitIds: z
@@ -17,12 +18,24 @@ export const receiveOrderSchema = z.object({
       z.object({
         orderLineId: z.uuid(),
         /** Sale units received now (feet, pieces or packs, as ordered). */
-        quantity: z.number().finite().positive('Enter a quantity above zero.'),
+        quantity: positiveQuantitySchema,
       }),
     )
     .min(1, 'Enter at least one received line.'),
 });
 export class ReceiveOrderDto extends zodDto(receiveOrderSchema) {}
+
+/**
+ * The `Idempotency-Key` request header of a receipt (IETF draft-ietf-httpapi-idempotency-key-header):
+ * the web app sends a fresh one per click, so a retried or doubled submit is booked once.
+ */
+export const idempotencyKeySchema = z
+  .string()
+  .trim()
+  .min(1)
+  .max(200, 'An Idempotency-Key has at most 200 characters.')
+  .regex(/^[\x21-\x7e]+$/, 'An Idempotency-Key uses visible ASCII characters only.')
+  .optional();
 export type ReceiveOrderInput = z.output<typeof receiveOrderSchema>;
 
 export interface OrderLineDto {
@@ -69,4 +82,6 @@ export interface DraftOrdersResult {
   coveredByStock: Array<{ partId: string; needed: number; stockOnHand: number }>;
   /** Bill-of-materials rows that could not be ordered (no catalogue part, retired, …). */
   unorderable: Array<{ partId: string | null; description: string; reason: string }>;
+  /** True when these revisions were already drafted (a repeated submit): the orders are the earlier ones. */
+  reused: boolean;
 }

@@ -1,6 +1,7 @@
 import { familySchema, parseDash, partKindSchema, type Part } from '@linesmith/catalog';
 import { z } from 'zod';
 import { zodDto } from '../../common/validation/zod-dto.js';
+import { versionSchema, pageSchema } from '../../common/validation/numbers.js';
 
 type DistributiveOmit<T, K extends PropertyKey> = T extends unknown ? Omit<T, K> : never;
 
@@ -17,7 +18,7 @@ export type NewPartBody = z.output<typeof createPartSchema>;
  * `stockOnHand` is dropped: stock changes only through stock adjustments, which keep its history.
  */
 export const updatePartSchema = z
-  .looseObject({ version: z.number().int().positive() })
+  .looseObject({ version: versionSchema })
   .transform(({ stockOnHand: _stockOnHand, ...changes }) => changes);
 export class UpdatePartDto extends zodDto(updatePartSchema) {}
 export type PartChanges = z.output<typeof updatePartSchema>;
@@ -47,7 +48,7 @@ export const listPartsQuerySchema = z.object({
   includeRetired: booleanQuery.default(false),
   sort: z.enum(PART_SORT_KEYS).default('description'),
   direction: z.enum(['asc', 'desc']).default('asc'),
-  page: z.coerce.number().int().min(1).default(1),
+  page: pageSchema,
   pageSize: z.coerce.number().int().min(1).max(200).default(50),
 });
 export class ListPartsQueryDto extends zodDto(listPartsQuerySchema) {}

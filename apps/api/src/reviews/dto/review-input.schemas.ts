@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { zodDto } from '../../common/validation/zod-dto.js';
 import { reviewStatusSchema } from '../review-status.js';
+import { revisionNumberSchema } from '../../common/validation/numbers.js';
 
 export const submitForReviewSchema = z.object({
   message: z.string().trim().max(500, 'Use at most 500 characters.').default(''),
@@ -37,7 +38,7 @@ export class ListReviewsQueryDto extends zodDto(listReviewsQuerySchema) {}
 export type ListReviewsQuery = z.output<typeof listReviewsQuerySchema>;
 
 /** A side of a comparison: a revision number, or `draft` for the working sketch. */
-export const documentRefSchema = z.union([z.literal('draft'), z.coerce.number().int().min(1)]);
+export const documentRefSchema = z.union([z.literal('draft'), revisionNumberSchema]);
 export type DocumentRef = z.output<typeof documentRefSchema>;
 
 export const compareQuerySchema = z.object({ from: documentRefSchema, to: documentRefSchema });

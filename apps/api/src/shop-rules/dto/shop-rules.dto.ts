@@ -1,6 +1,7 @@
 import { shopRulesSchema, type ShopRules } from '@linesmith/routing';
 import { z } from 'zod';
 import { zodDto } from '../../common/validation/zod-dto.js';
+import { versionSchema } from '../../common/validation/numbers.js';
 
 /** GET /api/shop-rules: the shop's rules, the defaults beside them and where each default comes from. */
 export interface ShopRulesDto {
@@ -14,7 +15,7 @@ export interface ShopRulesDto {
 
 /** PUT /api/shop-rules: the whole set of rules (missing keys take their defaults), against a version. */
 export const putShopRulesSchema = z.object({
-  version: z.number().int().nonnegative(),
+  version: versionSchema,
   rules: shopRulesSchema,
 });
 export class PutShopRulesDto extends zodDto(putShopRulesSchema) {}

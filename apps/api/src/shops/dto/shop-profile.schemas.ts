@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { zodDto } from '../../common/validation/zod-dto.js';
+import { versionSchema } from '../../common/validation/numbers.js';
 
 function isTimeZone(zone: string): boolean {
   try {
@@ -11,7 +12,7 @@ function isTimeZone(zone: string): boolean {
 }
 
 export const updateShopProfileSchema = z.object({
-  version: z.number().int().positive(),
+  version: versionSchema,
   name: z.string().trim().min(1, 'Enter the shop name.').max(120).optional(),
   timezone: z.string().trim().refine(isTimeZone, 'Choose a time zone such as America/Denver.').optional(),
   /** Sales tax on orders, percent (e.g. 8.25); stored to 3 decimals. */

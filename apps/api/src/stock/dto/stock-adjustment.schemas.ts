@@ -1,14 +1,15 @@
 import { z } from 'zod';
 import { zodDto } from '../../common/validation/zod-dto.js';
+import { MAX_QUANTITY_CHANGE, roundQuantity } from '../../common/validation/numbers.js';
 
 /** Stock is kept to 3 decimals (numeric(12,3)): inches of hose, or counts. */
 export const createStockAdjustmentSchema = z.object({
   delta: z
     .number()
     .finite()
-    .refine((value) => value !== 0, 'Enter a change other than zero.')
-    .refine((value) => Math.abs(value) < 1e8, 'This change is too large.')
-    .transform((value) => Math.round(value * 1000) / 1000),
+    .transform(roundQuantity)
+    .refine((value) => value !== 0, 'Enter a change of at least 0.001 (stock is kept to three decimals).')
+    .refine((value) => Math.abs(value) < MAX_QUANTITY_CHANGE, 'This change is too large.'),
   reason: z.string().trim().min(1, 'Say why the stock changes (count, delivery, damage…).').max(500),
 });
 export class CreateStockAdjustmentDto extends zodDto(createStockAdjustmentSchema) {}

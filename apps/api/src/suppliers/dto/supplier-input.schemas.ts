@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { zodDto } from '../../common/validation/zod-dto.js';
+import { versionSchema } from '../../common/validation/numbers.js';
 
 const nameSchema = z.string().trim().min(1, 'Enter a name.').max(120);
 const emailSchema = z.union([z.literal(''), z.email('Enter a valid e-mail address.').max(254)]);
@@ -26,7 +27,7 @@ export class CreateSupplierDto extends zodDto(createSupplierSchema) {}
 export type NewSupplier = z.output<typeof createSupplierSchema>;
 
 export const updateSupplierSchema = z.object({
-  version: z.number().int().positive(),
+  version: versionSchema,
   name: supplierFields.name.optional(),
   email: supplierFields.email.optional(),
   accountNumber: supplierFields.accountNumber.optional(),

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { zodDto } from '../../common/validation/zod-dto.js';
 import { passwordSchema } from '../password.js';
 import { roleSchema } from '../role.js';
+import { versionSchema, pageSchema } from '../../common/validation/numbers.js';
 
 const emailSchema = z
   .string()
@@ -23,7 +24,7 @@ export const createUserSchema = z.object({
 export class CreateUserDto extends zodDto(createUserSchema) {}
 
 export const updateUserSchema = z.object({
-  version: z.number().int().positive(),
+  version: versionSchema,
   displayName: displayNameSchema.optional(),
   roles: rolesSchema.optional(),
   active: z.boolean().optional(),
@@ -36,7 +37,7 @@ export const listUsersQuerySchema = z.object({
   search: z.string().trim().max(200).optional(),
   role: roleSchema.optional(),
   active: booleanQuery.optional(),
-  page: z.coerce.number().int().min(1).default(1),
+  page: pageSchema,
   pageSize: z.coerce.number().int().min(1).max(200).default(50),
 });
 export class ListUsersQueryDto extends zodDto(listUsersQuerySchema) {}
