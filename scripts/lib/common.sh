@@ -7,9 +7,30 @@ export ROOT
 export PGPORT="${PGPORT:-55432}"
 export PGHOST=127.0.0.1
 export DB_USER="${DB_USER:-linesmith}"
-export DB_PASSWORD="${DB_PASSWORD:-linesmith-local}"
 
 log() { printf '\033[1;36m[linesmith]\033[0m %s\n' "$*"; }
+
+# Secrets of this installation, generated once into .data/secrets.env (git-ignored, mode 600):
+# the API's token-signing key, the PostgreSQL superuser's password and the app role's password.
+# Nothing has a built-in default; variables already set in the environment win.
+SECRETS_FILE="$ROOT/.data/secrets.env"
+random_secret() { node -e "process.stdout.write(require('node:crypto').randomBytes(32).toString('hex'))"; }
+ensure_secrets() {
+  mkdir -p "$ROOT/.data"
+  if [ ! -f "$SECRETS_FILE" ]; then
+    log "generating this installation's secrets into .data/secrets.env"
+    (umask 077 && {
+      echo "JWT_SECRET=$(random_secret)"
+      echo "PG_SUPERUSER_PASSWORD=$(random_secret)"
+      echo "DB_PASSWORD=$(random_secret)"
+    } >"$SECRETS_FILE")
+  fi
+  local name value
+  while IFS='=' read -r name value; do
+    case "$name" in JWT_SECRET | PG_SUPERUSER_PASSWORD | DB_PASSWORD) [ -n "${!name:-}" ] || export "$name=$value" ;; esac
+  done <"$SECRETS_FILE"
+}
+ensure_secrets
 
 as_root() { if [ "$(id -u)" = 0 ]; then "$@"; else sudo "$@"; fi; }
 
@@ -63,7 +84,11 @@ start_postgres() {
     mkdir -p "$data"
     [ "$(id -u)" = 0 ] && chown postgres:postgres "$data"
     chmod 700 "$data"
-    as_pg "$bin/initdb" -D "$data" -U postgres --auth=trust -E UTF8 --locale=C.UTF-8 >/dev/null
+    local pwfile; pwfile="$(mktemp)"
+    printf '%s\n' "$PG_SUPERUSER_PASSWORD" >"$pwfile"
+    [ "$(id -u)" = 0 ] && chown postgres "$pwfile"
+    as_pg "$bin/initdb" -D "$data" -U postgres --auth=scram-sha-256 --pwfile="$pwfile" -E UTF8 --locale=C.UTF-8 >/dev/null
+    rm -f "$pwfile"
   fi
   if ! "$bin/pg_isready" -h 127.0.0.1 -p "$PGPORT" -q; then
     # A stale pid file after a crash must not block the start.
@@ -78,14 +103,30 @@ start_postgres() {
   for _ in $(seq 1 50); do "$bin/pg_isready" -h 127.0.0.1 -p "$PGPORT" -q && break; sleep 0.2; done
   "$bin/pg_isready" -h 127.0.0.1 -p "$PGPORT" -q || { log "PostgreSQL did not start; see $data/server.log"; exit 1; }
   export PG_DATA_DIR="$data"
+  require_passwords "$bin" "$data"
 }
 
-psql_admin() { "$(pg_bin)/psql" -h 127.0.0.1 -p "$PGPORT" -U postgres -v ON_ERROR_STOP=1 -qAt "$@"; }
+# Clusters made before passwords were required trusted every local connection: give the
+# superuser its password, then switch every rule of pg_hba.conf to scram-sha-256 and reload.
+require_passwords() {
+  local bin="$1" data="$2"
+  if as_pg grep -qE '^[^#]*[[:space:]]trust[[:space:]]*$' "$data/pg_hba.conf"; then
+    log "requiring passwords (scram-sha-256) on the PostgreSQL cluster in $data"
+    "$bin/psql" -h 127.0.0.1 -p "$PGPORT" -U postgres -d postgres -v ON_ERROR_STOP=1 -qAt \
+      -c "SET password_encryption = 'scram-sha-256'; ALTER ROLE postgres PASSWORD '$PG_SUPERUSER_PASSWORD'" >/dev/null
+    as_pg sed -i -E 's/^([^#]*[[:space:]])trust[[:space:]]*$/\1scram-sha-256/' "$data/pg_hba.conf"
+    as_pg "$bin/pg_ctl" -D "$data" reload >/dev/null
+  fi
+}
 
-# Create the app role and a database if missing.
+psql_admin() { PGPASSWORD="$PG_SUPERUSER_PASSWORD" "$(pg_bin)/psql" -h 127.0.0.1 -p "$PGPORT" -U postgres -v ON_ERROR_STOP=1 -qAt "$@"; }
+
+# The app's own role (no superuser, no role or database creation) with this installation's
+# password, and a database it owns, created if missing.
 ensure_database() {
   local db="$1"
-  psql_admin -d postgres -c "DO \$\$ BEGIN IF NOT EXISTS (SELECT FROM pg_roles WHERE rolname = '$DB_USER') THEN CREATE ROLE $DB_USER LOGIN PASSWORD '$DB_PASSWORD'; END IF; END \$\$;"
+  psql_admin -d postgres -c "DO \$\$ BEGIN IF NOT EXISTS (SELECT FROM pg_roles WHERE rolname = '$DB_USER') THEN CREATE ROLE $DB_USER LOGIN; END IF; END \$\$;"
+  psql_admin -d postgres -c "SET password_encryption = 'scram-sha-256'; ALTER ROLE $DB_USER LOGIN NOSUPERUSER NOCREATEDB NOCREATEROLE PASSWORD '$DB_PASSWORD'"
   if [ "$(psql_admin -d postgres -c "SELECT 1 FROM pg_database WHERE datname = '$db'")" != 1 ]; then
     log "creating database $db"
     psql_admin -d postgres -c "CREATE DATABASE $db OWNER $DB_USER"
