@@ -1,11 +1,12 @@
 import { PayloadTooLargeException, type CallHandler, type ExecutionContext, type NestInterceptor, type Type } from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
 import type { Observable } from 'rxjs';
+import { MULTIPART_TEXT_LIMITS } from '../common/validation/multipart-limits.js';
 import { PHOTO_MAX_BYTES, PhotoTooLargeError } from './upload-errors.js';
 
-/** Multer in memory for the `file` field, one file, at most 15 MB; UTF-8 file names decoded as such. */
+/** Multer in memory for the `file` field, one file, at most 15 MB, short text fields; UTF-8 file names decoded as such. */
 const MulterPhotoInterceptor: Type<NestInterceptor> = FileInterceptor('file', {
-  limits: { fileSize: PHOTO_MAX_BYTES, files: 1 },
+  limits: { ...MULTIPART_TEXT_LIMITS, fileSize: PHOTO_MAX_BYTES, files: 1 },
   defParamCharset: 'utf8',
 });
 

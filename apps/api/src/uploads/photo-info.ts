@@ -10,6 +10,15 @@ export interface PhotoInfo {
   heightPx: number;
 }
 
+/**
+ * A photo's decoded size is width × height × 4 bytes whoever displays it (the browser, the shop
+ * sheet's print): 50 megapixels is well above any camera a shop uses and below what a tablet can
+ * decode. Sides beyond 20,000 px or a ratio over 20:1 are not photos of a vehicle.
+ */
+export const PHOTO_MAX_PIXELS = 50_000_000;
+export const PHOTO_MAX_SIDE_PX = 20_000;
+export const PHOTO_MAX_ASPECT = 20;
+
 /** Content-Types that make no claim about the file. */
 const NO_CLAIM = new Set(['', 'application/octet-stream']);
 
@@ -50,5 +59,14 @@ export function readPhoto(bytes: Buffer, fileName: string, declaredType: string 
     throw rejected('The photo could not be read; it may be damaged or cut short.');
   }
   if (!size.width || !size.height) throw rejected('The photo has no width or height.');
+  const { width, height } = size;
+  if (width > PHOTO_MAX_SIDE_PX || height > PHOTO_MAX_SIDE_PX || width * height > PHOTO_MAX_PIXELS) {
+    throw rejected(
+      `The photo is ${width} × ${height} px; photos up to ${PHOTO_MAX_PIXELS / 1e6} megapixels (and ${PHOTO_MAX_SIDE_PX} px a side) are accepted. Save it smaller and upload again.`,
+    );
+  }
+  if (Math.max(width, height) / Math.min(width, height) > PHOTO_MAX_ASPECT) {
+    throw rejected(`The photo is ${width} × ${height} px, an implausible shape for a photo; it may be damaged.`);
+  }
   return { mimeType, ...displayedSize(size.width, size.height, size.orientation) };
 }
