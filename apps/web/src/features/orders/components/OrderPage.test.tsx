@@ -97,6 +97,7 @@ describe('Order page', () => {
     expect(fetchMock.callsTo('POST', '/api/orders/o-1/receive')[0].body).toEqual({
       lines: [{ orderLineId: 'l-1', quantity: 8 }],
     });
+    expect(fetchMock.callsTo('POST', '/api/orders/o-1/receive')[0].headers.get('Idempotency-Key')).toMatch(/^[0-9a-f]{32}$/);
   });
 
   it('asks before e-mailing a draft, showing the supplier address', async () => {

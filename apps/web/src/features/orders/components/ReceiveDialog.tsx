@@ -17,6 +17,7 @@ import {
 } from '@fluentui/react-components';
 import { useState } from 'react';
 import { describeError } from '../../../lib/describe-error';
+import { newIdempotencyKey } from '../../../lib/idempotency-key';
 import type { Order } from '../api/order-schema';
 import { useReceiveOrder } from '../hooks/useOrderMutations';
 import { outstanding, receiveInputOf } from '../utils/receive-form';
@@ -41,6 +42,8 @@ export function ReceiveDialog({ order, onClose }: ReceiveDialogProps) {
   );
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [error, setError] = useState<string | null>(null);
+  // This dialog books one receipt: every attempt at it carries the same key.
+  const [idempotencyKey] = useState(newIdempotencyKey);
 
   async function confirm() {
     setError(null);
@@ -51,7 +54,7 @@ export function ReceiveDialog({ order, onClose }: ReceiveDialogProps) {
     }
     setErrors({});
     try {
-      await receive.mutateAsync(checked.input);
+      await receive.mutateAsync({ input: checked.input, idempotencyKey });
       onClose();
     } catch (cause) {
       setError(describeError(cause, 'The delivery could not be booked in.'));

@@ -24,13 +24,24 @@ export function useSendOrder(id: string) {
   });
 }
 
+export interface ReceiveRequest {
+  input: ReceiveInput;
+  /** One per receipt the clerk books: resending it (a retry, a double click) books nothing twice. */
+  idempotencyKey: string;
+}
+
 /** Booking a receipt puts parts into stock, so the catalogue's stock figures are refetched too. */
 export function useReceiveOrder(id: string) {
   const client = useApiClient();
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: ReceiveInput) =>
-      client.request(`/api/orders/${encodeURIComponent(id)}/receive`, { method: 'POST', body: input, schema: orderSchema.optional() }),
+    mutationFn: ({ input, idempotencyKey }: ReceiveRequest) =>
+      client.request(`/api/orders/${encodeURIComponent(id)}/receive`, {
+        method: 'POST',
+        body: input,
+        headers: { 'Idempotency-Key': idempotencyKey },
+        schema: orderSchema.optional(),
+      }),
     onSettled: async () => {
       await queryClient.invalidateQueries({ queryKey: orderKeys.all });
       await queryClient.invalidateQueries({ queryKey: catalogueKeys.parts() });
