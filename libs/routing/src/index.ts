@@ -34,5 +34,6 @@ export {
   type UnorderableRow,
 } from './bom/order-sheet.js';
 export * from './evaluate/evaluate-circuit.js';
+export { createEvaluator, type CircuitEvaluator } from './evaluate/create-evaluator.js';
 export { flagKey } from './rules/flag-key.js';
 export * from './compare/compare-documents.js';

@@ -29,91 +29,140 @@ export interface BomInput {
   taxRatePercent: number;
 }
 
-/**
- * A circuit's bill of materials (DOMAIN §6): hose per part (cut lengths + trim per cut), hose
- * ends, adapters, bulkheads, plugs, the seals the ports and adapters need, one clamp per
- * support, sleeve per part. Unknown part ids are left out (the missing-part flag names them).
- */
-export function billOfMaterials(input: BomInput): BillOfMaterials {
-  const { parts, rules } = input;
-  // Catalogue parts are keyed by the part object itself (all come from `parts`, one per id): no key
-  // string to build and hash for every hose end and adapter of a large circuit.
-  const tallies = new Map<Part | string, Tally>();
-  const add = (key: Part | string, part: Part | undefined, kind: PartKind, description: string, unit: 'in' | 'each', quantity: number, lineId?: string) => {
-    let tally = tallies.get(key);
-    if (!tally) {
-      tally = { part, kind, description, unit, quantity: 0, cuts: 0, lineIds: new Set() };
-      tallies.set(key, tally);
-    }
-    tally.quantity += quantity;
-    if (lineId) tally.lineIds.add(lineId);
-    return tally;
-  };
-  const addPart = (part: Part, unit: 'in' | 'each', quantity: number, lineId?: string) =>
-    add(part, part, part.kind, part.description, unit, quantity, lineId);
+/** One addition to a bill of materials: what one line (or one plugged port) takes of one row. */
+export interface BomEntry {
+  /** The catalogue part itself, or a text key for a row without a part. */
+  key: Part | string;
+  part: Part | undefined;
+  kind: PartKind;
+  description: string;
+  unit: 'in' | 'each';
+  quantity: number;
+  lineId?: string;
+  /** A hose cut: counts towards the row's `cuts`. */
+  cut?: true;
+}
+
+/** The shop's seal parts by seal (the first of each), for the seals the ports and adapters need. */
+export function sealCatalogueOf(parts: ReadonlyMap<string, Part>): ReadonlyMap<string, Part> {
   const sealCatalogue = new Map<string, Part>();
   for (const part of parts.values()) {
     if (part.kind === 'seal' && !part.retired && !sealCatalogue.has(sealKey(part.attributes.seal))) {
       sealCatalogue.set(sealKey(part.attributes.seal), part);
     }
   }
-  const addSeal = (need: SealNeed, lineId?: string) => {
-    const part = sealCatalogue.get(sealKey(need));
-    if (part) addPart(part, 'each', 1, lineId);
-    else add(`seal:${sealKey(need)}`, undefined, 'seal', `${sealDescription(need)} (not in the catalogue)`, 'each', 1, lineId);
-  };
+  return sealCatalogue;
+}
 
-  for (const line of input.lines) {
-    const lineId = line.line.id;
-    const cut = line.report.cutLengthIn;
-    if (line.hose && cut !== null) addPart(line.hose, 'in', cut + rules.trimAllowanceIn, lineId).cuts += 1;
-    for (const end of ['from', 'to'] as const) {
-      const stack = line.stacks[end];
-      for (const item of stack.items) if (item.part) addPart(item.part, 'each', 1, lineId);
-      for (const need of stackSealNeeds(line[end], stack)) addSeal(need, lineId);
+const partEntry = (part: Part, unit: 'in' | 'each', quantity: number, lineId?: string): BomEntry => ({
+  key: part,
+  part,
+  kind: part.kind,
+  description: part.description,
+  unit,
+  quantity,
+  lineId,
+});
+
+function sealEntry(need: SealNeed, sealCatalogue: ReadonlyMap<string, Part>, lineId?: string): BomEntry {
+  const part = sealCatalogue.get(sealKey(need));
+  if (part) return partEntry(part, 'each', 1, lineId);
+  return { key: `seal:${sealKey(need)}`, part: undefined, kind: 'seal', description: `${sealDescription(need)} (not in the catalogue)`, unit: 'each', quantity: 1, lineId };
+}
+
+/** What one line adds to the bill: its hose cut, end stacks and their seals, clamps and sleeves. */
+export function lineBomEntries(line: LineAnalysis, parts: ReadonlyMap<string, Part>, rules: ShopRules, sealCatalogue: ReadonlyMap<string, Part>): BomEntry[] {
+  const entries: BomEntry[] = [];
+  const lineId = line.line.id;
+  const cut = line.report.cutLengthIn;
+  if (line.hose && cut !== null) entries.push({ ...partEntry(line.hose, 'in', cut + rules.trimAllowanceIn, lineId), cut: true });
+  for (const end of ['from', 'to'] as const) {
+    const stack = line.stacks[end];
+    for (const item of stack.items) if (item.part) entries.push(partEntry(item.part, 'each', 1, lineId));
+    for (const need of stackSealNeeds(line[end], stack)) entries.push(sealEntry(need, sealCatalogue, lineId));
+  }
+  const supports = line.line.supports.length;
+  if (supports > 0) {
+    const clamp = line.report.clampPartId ? parts.get(line.report.clampPartId) : undefined;
+    if (clamp) entries.push(partEntry(clamp, 'each', supports, lineId));
+    else if (line.hose) {
+      const od = line.hose.attributes.odIn;
+      entries.push({ key: `clamp:${od}`, part: undefined, kind: 'clamp', description: `Cushion clamp for ${od} in hose OD (not in the catalogue)`, unit: 'each', quantity: supports, lineId });
     }
-    const supports = line.line.supports.length;
-    if (supports > 0) {
-      const clamp = line.report.clampPartId ? parts.get(line.report.clampPartId) : undefined;
-      if (clamp) addPart(clamp, 'each', supports, lineId);
-      else if (line.hose) {
-        const od = line.hose.attributes.odIn;
-        add(`clamp:${od}`, undefined, 'clamp', `Cushion clamp for ${od} in hose OD (not in the catalogue)`, 'each', supports, lineId);
+  }
+  for (const sleeve of line.line.sleeves) {
+    const part = sleeve.partId ? parts.get(sleeve.partId) : undefined;
+    const length = sleeve.endIn - sleeve.startIn;
+    if (part) entries.push(partEntry(part, 'in', length, lineId));
+    else if (sleeve.partId === null) entries.push({ key: 'sleeve:unpicked', part: undefined, kind: 'sleeve', description: 'Fire sleeve (no part picked)', unit: 'in', quantity: length, lineId });
+  }
+  return entries;
+}
+
+/** What a port without a line adds: its plug and the plug's seals (nothing for an open port). */
+export function portBomEntries(port: PortEntry, connected: boolean, parts: ReadonlyMap<string, Part>, sealCatalogue: ReadonlyMap<string, Part>): BomEntry[] {
+  if (connected || !port.port.plugPartId) return [];
+  const entries: BomEntry[] = [];
+  const plug = parts.get(port.port.plugPartId);
+  if (plug) entries.push(partEntry(plug, 'each', 1));
+  for (const need of plugSealNeeds(port, plug)) entries.push(sealEntry(need, sealCatalogue));
+  return entries;
+}
+
+/**
+ * Sums entries, in the order given, into rows: priced, sorted by kind then part, taxed. The order
+ * matters only to floating-point sums, so callers pass lines in document order, then the ports.
+ */
+export function foldBom(entryLists: Iterable<readonly BomEntry[]>, taxRatePercent: number): BillOfMaterials {
+  return finishBom(tallyBomRows(entryLists), taxRatePercent);
+}
+
+/** One priced row per key, in the order the keys first appear (each row depends on its own entries only). */
+export function tallyBomRows(entryLists: Iterable<readonly BomEntry[]>): BomRow[] {
+  // Catalogue parts are keyed by the part object itself (all come from `parts`, one per id): no key
+  // string to build and hash for every hose end and adapter of a large circuit.
+  const tallies = new Map<Part | string, Tally>();
+  for (const entries of entryLists) {
+    for (const entry of entries) {
+      let tally = tallies.get(entry.key);
+      if (!tally) {
+        tally = { part: entry.part, kind: entry.kind, description: entry.description, unit: entry.unit, quantity: 0, cuts: 0, lineIds: new Set() };
+        tallies.set(entry.key, tally);
       }
+      tally.quantity += entry.quantity;
+      if (entry.lineId) tally.lineIds.add(entry.lineId);
+      if (entry.cut) tally.cuts += 1;
     }
-    for (const sleeve of line.line.sleeves) {
-      const part = sleeve.partId ? parts.get(sleeve.partId) : undefined;
-      const length = sleeve.endIn - sleeve.startIn;
-      if (part) addPart(part, 'in', length, lineId);
-      else if (sleeve.partId === null) add('sleeve:unpicked', undefined, 'sleeve', 'Fire sleeve (no part picked)', 'in', length, lineId);
-    }
-  }
-  for (const port of input.ports) {
-    if (input.connectedPorts.has(port.key) || !port.port.plugPartId) continue;
-    const plug = parts.get(port.port.plugPartId);
-    if (plug) addPart(plug, 'each', 1);
-    for (const need of plugSealNeeds(port, plug)) addSeal(need);
   }
 
-  const rows: BomRow[] = [...tallies.values()].map((t) => {
-    const row: BomRow = {
-      partId: t.part?.id ?? null,
-      kind: t.kind,
-      description: t.description,
-      quantity: t.quantity,
-      unit: t.unit,
-      priceCents: t.part ? priceOf(t.part.priceCents, t.part.saleUnit, t.quantity, t.unit) : null,
-      supplierId: t.part?.supplierId ?? null,
-      supplierPartNumber: t.part?.supplierPartNumber ?? '',
-      lineIds: [...t.lineIds].sort(),
-    };
-    if (t.kind === 'hose' && t.part) row.cuts = t.cuts;
-    return row;
-  });
+  return [...tallies.values()].map((t) => bomRow(t, t.quantity, t.cuts, [...t.lineIds].sort()));
+}
+
+/** The row of one key: `first` is its first entry (part, kind, description, unit), with the sums over all its entries. */
+export function bomRow(first: Pick<BomEntry, 'part' | 'kind' | 'description' | 'unit'>, quantity: number, cuts: number, lineIds: string[]): BomRow {
+  const part = first.part;
+  const row: BomRow = {
+    partId: part?.id ?? null,
+    kind: first.kind,
+    description: first.description,
+    quantity,
+    unit: first.unit,
+    priceCents: part ? priceOf(part.priceCents, part.saleUnit, quantity, first.unit) : null,
+    supplierId: part?.supplierId ?? null,
+    supplierPartNumber: part?.supplierPartNumber ?? '',
+    lineIds,
+  };
+  if (first.kind === 'hose' && part) row.cuts = cuts;
+  return row;
+}
+
+/** Rows in bill order (kind, then part), with the subtotal, tax and total. */
+export function finishBom(unsorted: readonly BomRow[], taxRatePercent: number): BillOfMaterials {
+  const rows = [...unsorted];
   const sortKey = (r: BomRow) => r.partId ?? `\uffff${r.description}`; // catalogue parts first, then the unlisted
   rows.sort((a, b) => KIND_ORDER.indexOf(a.kind) - KIND_ORDER.indexOf(b.kind) || (sortKey(a) < sortKey(b) ? -1 : sortKey(a) > sortKey(b) ? 1 : 0));
   const subtotalCents = rows.reduce((sum, r) => sum + (r.priceCents ?? 0), 0);
-  const taxCents = taxOf(subtotalCents, input.taxRatePercent);
+  const taxCents = taxOf(subtotalCents, taxRatePercent);
   return {
     rows,
     subtotalCents,
@@ -121,4 +170,18 @@ export function billOfMaterials(input: BomInput): BillOfMaterials {
     totalCents: subtotalCents + taxCents,
     unpricedRows: rows.filter((r) => r.priceCents === null).length,
   };
+}
+
+/**
+ * A circuit's bill of materials (DOMAIN §6): hose per part (cut lengths + trim per cut), hose
+ * ends, adapters, bulkheads, plugs, the seals the ports and adapters need, one clamp per
+ * support, sleeve per part. Unknown part ids are left out (the missing-part flag names them).
+ */
+export function billOfMaterials(input: BomInput): BillOfMaterials {
+  const { parts, rules } = input;
+  const sealCatalogue = sealCatalogueOf(parts);
+  const lists: BomEntry[][] = [];
+  for (const line of input.lines) lists.push(lineBomEntries(line, parts, rules, sealCatalogue));
+  for (const port of input.ports) lists.push(portBomEntries(port, input.connectedPorts.has(port.key), parts, sealCatalogue));
+  return foldBom(lists, input.taxRatePercent);
 }

@@ -5,7 +5,7 @@ import type { CircuitDocument } from '../circuit/document.schema.js';
 import { pxPerIn as scaleOf } from '../geometry/units.js';
 import { analyseLine, portKey, type LineAnalysis } from '../lines/analyse-line.js';
 import { cachedMate } from '../lines/end-stack.js';
-import { prepareZones } from '../lines/heat.js';
+import { prepareZones, type PreparedZones } from '../lines/heat.js';
 import type { LineReport } from '../lines/line-report.js';
 import type { PortEntry } from '../lines/port-entry.js';
 import { portPosition } from '../lines/port-position.js';
@@ -20,6 +20,26 @@ export interface CircuitEvaluation {
   bom: BillOfMaterials;
 }
 
+/** The sketch scale in px per inch, or null when it is missing or unusable. */
+export function usableScaleOf(doc: CircuitDocument): number | null {
+  const pxPerIn = doc.calibration ? scaleOf(doc.calibration) : null;
+  return pxPerIn !== null && Number.isFinite(pxPerIn) && pxPerIn > 0 ? pxPerIn : null;
+}
+
+/** The circuit's heat zones in inches with their clearances; none without a scale. */
+export function prepareDocZones(doc: CircuitDocument, rules: ShopRules, usableScale: number | null): PreparedZones {
+  // Without a scale the zones cannot be placed in inches; scale-missing then says the heat check did not run.
+  return prepareZones(
+    usableScale === null
+      ? []
+      : doc.heatZones.map((z) => ({
+          id: z.id,
+          polygon: z.polygon.map((p) => ({ x: p.x / usableScale, y: p.y / usableScale })),
+          clearanceIn: z.clearanceIn ?? rules.heatClearanceIn[z.kind],
+        })),
+  );
+}
+
 /** Builds the shared context once: ports, scale, and every line worked out. */
 export function buildRuleContext(doc: CircuitDocument, parts: readonly Part[], rules: ShopRules): RuleContext {
   const partsById = new Map(parts.map((p) => [p.id, p]));
@@ -30,18 +50,8 @@ export function buildRuleContext(doc: CircuitDocument, parts: readonly Part[], r
       if (!ports.has(key)) ports.set(key, { key, unit, port, positionPx: portPosition(unit, port) });
     }
   }
-  const pxPerIn = doc.calibration ? scaleOf(doc.calibration) : null;
-  const usableScale = pxPerIn !== null && Number.isFinite(pxPerIn) && pxPerIn > 0 ? pxPerIn : null;
-  // Without a scale the zones cannot be placed in inches; scale-missing then says the heat check did not run.
-  const zones = prepareZones(
-    usableScale === null
-      ? []
-      : doc.heatZones.map((z) => ({
-          id: z.id,
-          polygon: z.polygon.map((p) => ({ x: p.x / usableScale, y: p.y / usableScale })),
-          clearanceIn: z.clearanceIn ?? rules.heatClearanceIn[z.kind],
-        })),
-  );
+  const usableScale = usableScaleOf(doc);
+  const zones = prepareDocZones(doc, rules, usableScale);
   const mate = cachedMate();
   const clamps = parts.filter((p) => p.kind === 'clamp' && !p.retired);
   const env = { parts: partsById, clamps, rules, pxPerIn: usableScale, zones, ports, mate };
