@@ -1,31 +1,50 @@
-import type { Part, SealNeed } from '@linesmith/catalog';
-import { sealForPort } from '@linesmith/catalog';
+import type { Fluid, Part, PartOf, SealNeed } from '@linesmith/catalog';
+import { compoundProblem, hasSeatForms, sealCompoundLabels, sealsForPort, suitableCompounds } from '@linesmith/catalog';
 import type { ResolvedStack } from '../lines/end-stack.js';
 import type { PortEntry } from '../lines/port-entry.js';
 
-export const sealKey = (need: SealNeed): string =>
-  need.type === 'o-ring' ? `o-ring:${need.as568}` : `crush-washer:${need.size}`;
-
-export const sealDescription = (need: SealNeed): string =>
-  need.type === 'o-ring'
-    ? /^\d+$/.test(need.as568)
-      ? `O-ring AS568-${need.as568}`
-      : `O-ring ${need.as568}`
-    : `Crush washer ${need.size}`;
+export const sealKey = (need: SealNeed): string => (need.type === 'o-ring' ? `o-ring:${need.as568}` : `${need.type}:${need.size}`);
 
 /**
- * Seals one end stack needs: the port's own seal (O-ring boss, metric port) or, when the port
- * names none, the seal of the adapter in it; the seals of deeper adapters; less any seal parts
- * already listed in the stack.
+ * A seal in words, optionally with the compound to buy: "O-ring AS568-906",
+ * "Bonded washer M14", "O-ring AS568-906, fluorocarbon".
+ */
+export const sealDescription = (need: SealNeed, compound?: string): string => {
+  const base =
+    need.type === 'o-ring'
+      ? /^\d+$/.test(need.as568)
+        ? `O-ring AS568-${need.as568}`
+        : `O-ring ${need.as568}`
+      : `${need.type === 'bonded-washer' ? 'Bonded washer' : 'Crush washer'} ${need.size}`;
+  return compound ? `${base}, ${compound}` : base;
+};
+
+/**
+ * The seals a joint at a port needs. For ports whose seat form decides the seal (metric, BSP
+ * parallel) the stud in the port decides: a sealing-edge stud in an ISO 9974-1 port takes no
+ * washer, a washer stud takes one. Otherwise the port's own seals (O-ring boss, ORFS, banjo).
+ */
+function portJointSeals(port: PortEntry | undefined, stack: ResolvedStack): SealNeed[] {
+  if (!port) return [];
+  const connection = port.port.connection;
+  const first = stack.joints[0];
+  if (hasSeatForms(connection.family) && first && first.index === 0 && first.result.ok) return sealsForPort(first.outer);
+  return sealsForPort(connection);
+}
+
+/**
+ * Seals one end stack needs: the seals of the joint at the port (see above) or, when it names
+ * none, the seal of the adapter in it; the seals of deeper adapters; less any seal parts already
+ * listed in the stack.
  */
 export function stackSealNeeds(port: PortEntry | undefined, stack: ResolvedStack): SealNeed[] {
   const needs: SealNeed[] = [];
-  const portSeal = port ? sealForPort(port.port.connection) : undefined;
-  if (portSeal) needs.push(portSeal);
+  const portSeals = portJointSeals(port, stack);
+  needs.push(...portSeals);
   for (const item of stack.items) {
     const part = item.part;
     if (part?.kind !== 'adapter' || !part.attributes.seal) continue;
-    if (item.index === 0 && portSeal) continue; // the same joint: the port's seal is the one it takes
+    if (item.index === 0 && (portSeals.length > 0 || (port && hasSeatForms(port.port.connection.family)))) continue; // the same joint: its seals are counted above
     needs.push(part.attributes.seal);
   }
   const listed: string[] = [];
@@ -39,9 +58,57 @@ export function stackSealNeeds(port: PortEntry | undefined, stack: ResolvedStack
   });
 }
 
-/** Seals a plugged port needs: the port's seal, or the plug's own. */
+/**
+ * Seals a plugged port needs: the port's seals, or the plug's own. In a seat-form port (metric,
+ * BSP parallel) a plug of the same family seals by its own seat form (a sealing-edge plug needs
+ * no washer).
+ */
 export function plugSealNeeds(port: PortEntry, plug: Part | undefined): SealNeed[] {
-  const portSeal = sealForPort(port.port.connection);
-  if (portSeal) return [portSeal];
+  const connection = port.port.connection;
+  if (hasSeatForms(connection.family) && plug?.kind === 'plug' && plug.attributes.connection.family === connection.family) {
+    return sealsForPort(plug.attributes.connection);
+  }
+  const portSeals = sealsForPort(connection);
+  if (portSeals.length > 0) return portSeals;
   return plug?.kind === 'plug' && plug.attributes.seal ? [plug.attributes.seal] : [];
+}
+
+/** The fluid and temperature a circuit's seals must suit. */
+export interface SealService {
+  fluid: Fluid;
+  maxTempF?: number;
+}
+
+/**
+ * How well a seal part suits the service: 0 compatible, 1 compound not stated, 2 not compatible.
+ * Used to pick which of several catalogue parts of one seal size goes on the bill.
+ */
+export function sealSuitability(part: PartOf<'seal'>, service: SealService | undefined): number {
+  if (!service) return 0;
+  const { compound } = part.attributes;
+  if (compound === undefined) return 1;
+  return compoundProblem(compound, service.fluid, service.maxTempF) === undefined ? 0 : 2;
+}
+
+/**
+ * The shop's seal parts by seal size, the one that best suits the fluid and temperature of each
+ * (catalogue order among equals), for the seals the ports and adapters need.
+ */
+export function suitedSealCatalogue(parts: ReadonlyMap<string, Part> | Iterable<Part>, service: SealService | undefined): Map<string, PartOf<'seal'>> {
+  const chosen = new Map<string, PartOf<'seal'>>();
+  const all = parts instanceof Map ? parts.values() : (parts as Iterable<Part>);
+  for (const part of all) {
+    if (part.kind !== 'seal' || part.retired) continue;
+    const key = sealKey(part.attributes.seal);
+    const current = chosen.get(key);
+    if (!current || sealSuitability(part, service) < sealSuitability(current, service)) chosen.set(key, part);
+  }
+  return chosen;
+}
+
+/** The compound to buy for a seal the catalogue lacks ("fluorocarbon"), from the compatibility table. */
+export function compoundToBuy(service: SealService | undefined): string | undefined {
+  if (!service) return undefined;
+  const best = suitableCompounds(service.fluid, service.maxTempF)[0];
+  return best === undefined ? undefined : sealCompoundLabels[best];
 }

@@ -11,7 +11,7 @@ export function cachedMate(): Mater {
   // Maps, not WeakMaps: the cache lives for one evaluation, and weak tables cost the GC extra.
   const byObject = new Map<ConnectionSpec, Map<ConnectionSpec, MateResult>>();
   const byValue = new Map<string, MateResult>();
-  const key = (c: ConnectionSpec) => `${c.family}|${c.size}|${c.gender}`;
+  const key = (c: ConnectionSpec) => (c.seat === undefined ? `${c.family}|${c.size}|${c.gender}` : `${c.family}|${c.size}|${c.gender}|${c.seat}`);
   return (a, b) => {
     let row = byObject.get(a);
     let result = row?.get(b);

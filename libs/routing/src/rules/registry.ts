@@ -7,6 +7,7 @@ import { heatContactRule } from './heat-contact.rule.js';
 import { heatSleeveRule } from './heat-sleeve.rule.js';
 import { hoseEndSizeRule } from './hose-end-size.rule.js';
 import { incompleteLineRule } from './incomplete-line.rule.js';
+import { jointCautionRule } from './joint-caution.rule.js';
 import { jointGenderRule } from './joint-gender.rule.js';
 import { jointSeatRule } from './joint-seat.rule.js';
 import { jointThreadRule } from './joint-thread.rule.js';
@@ -27,6 +28,7 @@ export const ruleRegistry: readonly Rule[] = [
   jointSeatRule,
   jointThreadRule,
   jointGenderRule,
+  jointCautionRule,
   portRequirementRule,
   hoseEndSizeRule,
   ratingPressureRule,

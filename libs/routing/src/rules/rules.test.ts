@@ -25,7 +25,13 @@ const coolSleeve = part({
   description: 'Low-temperature sleeve',
   attributes: { fitsOd: { minIn: 0.5, maxIn: 0.8 }, maxTempF: 200 },
 });
-const extraParts = [...testParts, ptfeOnlyEnd, narrowAdapter, coolSleeve];
+const nptfPlug = part({
+  id: 'plug-nptf4',
+  kind: 'plug',
+  description: '1/4 NPTF pipe plug',
+  attributes: { connection: { family: 'nptf', size: '1/4', gender: 'male' }, maxPressurePsi: 3000 },
+});
+const extraParts = [...testParts, ptfeOnlyEnd, narrowAdapter, coolSleeve, nptfPlug];
 
 const portOf = (doc: CircuitDocumentInput, unitId: string, portId: string) =>
   doc.units.find((u) => u.id === unitId)!.ports.find((p) => p.id === portId)!;
@@ -99,6 +105,12 @@ const cases: Case[] = [
     source: 'ethanol blends need a PTFE liner; the rubber hose lists ATF, engine oil and power steering only',
     raises: (d) => (d.circuit.fluid = 'e85'),
     quiet: (d) => (d.circuit.fluid = 'engine-oil'),
+  },
+  {
+    code: 'joint-caution',
+    source: 'ASME B1.20.3: NPTF against NPT joins but the dry seal is not assured (sealant needed)',
+    raises: (d) => d.units[0].ports.push({ id: 'drain', connection: { family: 'npt', size: '1/4', gender: 'female' }, role: 'drain', dx: 0, dy: 100, plugPartId: 'plug-nptf4' }),
+    quiet: (d) => d.units[0].ports.push({ id: 'drain', connection: { family: 'nptf', size: '1/4', gender: 'female' }, role: 'drain', dx: 0, dy: 100, plugPartId: 'plug-nptf4' }),
   },
   {
     code: 'bend-radius',
@@ -238,6 +250,9 @@ describe('the rules', () => {
     expect(flags.map((f) => `${f.severity}:${f.code}:${f.target.id}`)).toEqual([
       'blocker:fluid:L1',
       'blocker:fluid:L2',
+      // The nitrile AS568-906 O-rings of the two O-ring boss joints (E85: common practice).
+      'blocker:fluid:L1:from:0',
+      'blocker:fluid:L2:to:0',
       'blocker:port-requirement:L2:to:0',
       'caution:support-gap:L1',
       'caution:support-gap:L2',

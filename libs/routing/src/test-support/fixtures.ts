@@ -97,7 +97,7 @@ export const oring906 = part({
   description: 'O-ring AS568-906',
   priceCents: 2000,
   saleUnit: { type: 'pack', size: 25 },
-  attributes: { seal: { type: 'o-ring', as568: '906' } },
+  attributes: { seal: { type: 'o-ring', as568: '906' }, compound: 'nitrile', hardnessShoreA: 90 },
 });
 
 export const orbPlug6 = part({
