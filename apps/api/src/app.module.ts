@@ -1,8 +1,6 @@
 import { Module, type DynamicModule } from '@nestjs/common';
-import { ServeStaticModule } from '@nestjs/serve-static';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { LoggerModule } from 'nestjs-pino';
-import { existsSync } from 'node:fs';
 import { AuditModule } from './audit/audit.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { BuildsModule } from './builds/builds.module.js';
@@ -31,14 +29,11 @@ import { UsersModule } from './users/users.module.js';
 export interface AppModuleOptions {
   /** Environment overrides (tests); everything else comes from process.env. */
   env?: Record<string, string>;
-  /** The built web app to serve for every non-/api path, when the folder exists. */
-  webDistDir?: string;
 }
 
 @Module({})
 export class AppModule {
   static forRoot(options: AppModuleOptions = {}): DynamicModule {
-    const webDist = options.webDistDir && existsSync(options.webDistDir) ? options.webDistDir : undefined;
     return {
       module: AppModule,
       imports: [
@@ -51,9 +46,6 @@ export class AppModule {
           inject: [AppConfigService],
           useFactory: (config: AppConfigService) => databaseOptions(config.get('DATABASE_URL')),
         }),
-        ...(webDist
-          ? [ServeStaticModule.forRoot({ rootPath: webDist, exclude: /^\/api(\/|$)/, serveStaticOptions: { index: false } })]
-          : []),
         ShopsModule,
         UsersModule,
         AuthModule,

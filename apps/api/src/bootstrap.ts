@@ -5,12 +5,15 @@ import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import cookieParser from 'cookie-parser';
 import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
-import { dirname, resolve } from 'node:path';
+import type { Response } from 'express';
+import { existsSync } from 'node:fs';
+import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { AppModule } from './app.module.js';
 import { AppConfigService } from './config/app-config.service.js';
 import { AllExceptionsFilter } from './common/errors/all-exceptions.filter.js';
 import { ZodValidationPipe } from './common/validation/zod-validation.pipe.js';
+import { cspNonce, nonceOf, serveWebApp } from './web-app/serve-web-app.js';
 
 export const API_PREFIX = 'api';
 
@@ -28,7 +31,7 @@ function defaultWebDistDir(): string {
 /** Builds the configured, not yet listening app: shared by main.ts and the e2e tests. */
 export async function createApp(options: CreateAppOptions = {}): Promise<NestExpressApplication> {
   const webDistDir = options.env?.WEB_DIST_DIR ?? process.env.WEB_DIST_DIR ?? defaultWebDistDir();
-  const app = await NestFactory.create<NestExpressApplication>(AppModule.forRoot({ env: options.env, webDistDir }), {
+  const app = await NestFactory.create<NestExpressApplication>(AppModule.forRoot({ env: options.env }), {
     bufferLogs: true,
     cors: false,
   });
@@ -40,14 +43,22 @@ export async function createApp(options: CreateAppOptions = {}): Promise<NestExp
   // A sketch document of a large circuit (hundreds of lines, thousands of corners) exceeds the
   // 100 kB default; zod still validates every body.
   app.useBodyParser('json', { limit: '5mb' });
+  app.use(cspNonce);
   app.use(
     helmet({
       contentSecurityPolicy: {
-        // Sketch photos are shown from blob: URLs before upload.
-        directives: { 'img-src': ["'self'", 'data:', 'blob:'] },
+        directives: {
+          // Sketch photos are shown from blob: URLs before upload.
+          'img-src': ["'self'", 'data:', 'blob:'],
+          // Fluent UI inserts its styles at run time: allowed by this response's nonce, not 'unsafe-inline'.
+          'style-src': ["'self'", (_request, response) => `'nonce-${nonceOf(response as Response)}'`],
+          // A shop may serve Linesmith over plain http on its own network: do not rewrite to https.
+          'upgrade-insecure-requests': null,
+        },
       },
     }),
   );
+  if (existsSync(join(webDistDir, 'index.html'))) app.use(serveWebApp(webDistDir));
   app.use(cookieParser());
   app.useGlobalFilters(new AllExceptionsFilter());
   app.useGlobalPipes(new ZodValidationPipe());

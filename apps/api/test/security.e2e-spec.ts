@@ -134,6 +134,9 @@ describe('security checks (e2e)', () => {
         expect(csp).toMatch(/default-src 'self'/);
         expect(csp).toMatch(/frame-ancestors 'self'/);
         expect(csp).toMatch(/object-src 'none'/);
+        // Run-time styles by nonce only (a fresh one per response), never 'unsafe-inline'.
+        expect(csp).toMatch(/style-src 'self' 'nonce-[A-Za-z0-9+/=]{24}'/);
+        expect(csp).not.toMatch(/unsafe-inline/);
         expect(response.headers['x-content-type-options']).toBe('nosniff');
         expect(response.headers['x-frame-options']).toBe('SAMEORIGIN');
         expect(response.headers['referrer-policy']).toBe('no-referrer');
