@@ -80,3 +80,4 @@ export type { ChainPart, Orientation } from './solver/adapter-index.js';
 export { portRequirementSchema, meetsRequirement, type PortRequirement } from './solver/port-requirement.js';
 export { connectionKey, matingKeys } from './solver/connection-key.js';
 export { demoSuppliers, demoParts, type DemoSupplier } from './demo/demo-catalogue.js';
+export { changeConnection } from './connection-edit.js';

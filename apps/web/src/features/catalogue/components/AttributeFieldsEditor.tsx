@@ -51,9 +51,9 @@ export function AttributeFieldsEditor({ kind, values, errors, onChange }: Attrib
         );
       case 'choice':
         return (
-          <Field key={field.key} label={label} required validationMessage={errors[field.key]}>
+          <Field key={field.key} label={label} required={!field.optional} validationMessage={errors[field.key]}>
             <Select value={text(field.key)} onChange={(_, d) => onChange(field.key, d.value)}>
-              <option value="">Choose…</option>
+              <option value="">{field.optional ? 'Not stated' : 'Choose…'}</option>
               {field.options.map((o) => (
                 <option key={o.value} value={o.value}>
                   {o.label}
@@ -81,7 +81,7 @@ export function AttributeFieldsEditor({ kind, values, errors, onChange }: Attrib
         return (
           <fieldset key={field.key} className={`${styles.wide} ${styles.fieldset}`}>
             <legend>
-              {label} <span aria-hidden="true">*</span>
+              {label} {!field.optional && <span aria-hidden="true">*</span>}
             </legend>
             <div className={styles.choices}>
               {field.options.map((o) => (
@@ -111,10 +111,12 @@ export function AttributeFieldsEditor({ kind, values, errors, onChange }: Attrib
               family={text(`${field.key}.family`)}
               size={text(`${field.key}.size`)}
               gender={text(`${field.key}.gender`)}
+              seat={text(`${field.key}.seat`)}
               errors={{
                 family: errors[`${field.key}.family`],
                 size: errors[`${field.key}.size`],
                 gender: errors[`${field.key}.gender`],
+                seat: errors[`${field.key}.seat`],
               }}
               onChange={(sub, value) => onChange(`${field.key}.${sub}`, value)}
             />
@@ -129,11 +131,12 @@ export function AttributeFieldsEditor({ kind, values, errors, onChange }: Attrib
                 <option value="">{kind === 'seal' ? 'Choose…' : 'None'}</option>
                 <option value="o-ring">O-ring</option>
                 <option value="crush-washer">Crush washer</option>
+                <option value="bonded-washer">Bonded washer</option>
               </Select>
             </Field>
             {type && (
               <Field
-                label={type === 'o-ring' ? 'AS568 dash number' : 'Washer size'}
+                label={type === 'o-ring' ? 'AS568 dash number (or ISO name)' : 'Washer size (thread it fits, e.g. M14 or 1/2 BSP)'}
                 required
                 validationMessage={errors[`${field.key}.value`]}
               >

@@ -1,4 +1,4 @@
-import { partAttributeSchemas, type PartKind } from '@linesmith/catalog';
+import { hasSeatForms, partAttributeSchemas, type Family, type PartKind } from '@linesmith/catalog';
 import { attributeFields, type AttributeField } from './part-attribute-fields';
 
 /** The editor's raw attribute values: text as typed, string lists for multi-choices. */
@@ -23,13 +23,16 @@ function set(target: Record<string, unknown>, path: string, value: unknown): voi
   current[parts[parts.length - 1]] = value;
 }
 
+/** A connection's inputs; the seat form only matters for metric and BSP parallel ends. */
+const connectionSubs = ['family', 'size', 'gender', 'seat'] as const;
+
 function text(value: unknown): string {
   return value === undefined || value === null ? '' : String(value);
 }
 
 /** The editor keys of one field (a connection has three inputs, a seal two). */
 export function fieldKeys(field: AttributeField): string[] {
-  if (field.type === 'connection') return [`${field.key}.family`, `${field.key}.size`, `${field.key}.gender`];
+  if (field.type === 'connection') return connectionSubs.map((sub) => `${field.key}.${sub}`);
   if (field.type === 'seal') return [`${field.key}.type`, `${field.key}.value`];
   return [field.key];
 }
@@ -50,7 +53,7 @@ export function attributeValuesOf(kind: PartKind, attributes: unknown): Attribut
     if (field.type === 'multi-choice') values[field.key] = Array.isArray(value) ? value.map(String) : [];
     else if (field.type === 'text-list') values[field.key] = Array.isArray(value) ? value.join(', ') : '';
     else if (field.type === 'connection') {
-      for (const sub of ['family', 'size', 'gender']) values[`${field.key}.${sub}`] = text(get(value, sub));
+      for (const sub of connectionSubs) values[`${field.key}.${sub}`] = text(get(value, sub));
     } else if (field.type === 'seal') {
       const type = text(get(value, 'type'));
       values[`${field.key}.type`] = type;
@@ -92,14 +95,17 @@ export function attributesFromValues(kind: PartKind, values: AttributeValues): R
       }
       case 'multi-choice': {
         const raw = values[field.key];
-        set(attributes, field.key, Array.isArray(raw) ? raw : []);
+        const items = Array.isArray(raw) ? raw : [];
+        if (items.length > 0 || !field.optional) set(attributes, field.key, items);
         break;
       }
       case 'connection': {
         const spec: Record<string, string> = {};
-        for (const sub of ['family', 'size', 'gender']) {
+        for (const sub of connectionSubs) {
           const raw = scalar(values, `${field.key}.${sub}`);
-          if (raw !== '') spec[sub] = raw;
+          if (raw === '') continue;
+          if (sub === 'seat' && !hasSeatForms(spec.family as Family)) continue; // a seat left over from another family
+          spec[sub] = raw;
         }
         set(attributes, field.key, spec);
         break;
@@ -109,7 +115,7 @@ export function attributesFromValues(kind: PartKind, values: AttributeValues): R
         const value = scalar(values, `${field.key}.value`);
         // An adapter or plug without a seal leaves it out; a seal part must name one.
         if (type === 'o-ring') set(attributes, field.key, { type, as568: value });
-        else if (type === 'crush-washer') set(attributes, field.key, { type, size: value });
+        else if (type === 'crush-washer' || type === 'bonded-washer') set(attributes, field.key, { type, size: value });
         break;
       }
     }

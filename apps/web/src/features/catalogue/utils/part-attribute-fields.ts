@@ -1,23 +1,37 @@
-import { fluidSchema, hoseLinerSchema, type PartKind } from '@linesmith/catalog';
+import {
+  fluidSchema,
+  hoseClassInfo,
+  hoseClassSchema,
+  hoseEndTypeLabels,
+  hoseEndTypeSchema,
+  hoseLinerSchema,
+  sealCompoundLabels,
+  sealCompoundSchema,
+  type PartKind,
+} from '@linesmith/catalog';
 import { fluidLabels, linerLabels } from './part-kind-labels';
 
 /**
  * The editor's fields per part kind. `key` is the attribute's path (dotted); connection and
- * seal fields expand to `key.family`/`key.size`/`key.gender` and `key.type`/`key.value`.
+ * seal fields expand to `key.family`/`key.size`/`key.gender`/`key.seat` and `key.type`/`key.value`.
  * The catalogue library's `partAttributeSchemas` stays the judge of what is valid.
  */
 export type AttributeField =
   | { type: 'number'; key: string; label: string; unit?: string; optional?: boolean }
   | { type: 'text'; key: string; label: string; hint: string }
   | { type: 'text-list'; key: string; label: string; hint: string }
-  | { type: 'choice'; key: string; label: string; options: readonly { value: string; label: string }[] }
-  | { type: 'multi-choice'; key: string; label: string; options: readonly { value: string; label: string }[] }
+  | { type: 'choice'; key: string; label: string; options: readonly { value: string; label: string }[]; optional?: boolean }
+  | { type: 'multi-choice'; key: string; label: string; options: readonly { value: string; label: string }[]; optional?: boolean }
   | { type: 'angle'; key: string; label: string }
   | { type: 'connection'; key: string; label: string }
   | { type: 'seal'; key: string; label: string };
 
 const liners = hoseLinerSchema.options.map((value) => ({ value, label: linerLabels[value] }));
 const fluids = fluidSchema.options.map((value) => ({ value, label: fluidLabels[value] }));
+const hoseClasses = hoseClassSchema.options.map((value) => ({ value, label: hoseClassInfo[value].label }));
+const endTypes = hoseEndTypeSchema.options.map((value) => ({ value, label: hoseEndTypeLabels[value] }));
+const compounds = sealCompoundSchema.options.map((value) => ({ value, label: sealCompoundLabels[value].charAt(0).toUpperCase() + sealCompoundLabels[value].slice(1) }));
+const fittedSealCompound: AttributeField = { type: 'choice', key: 'sealCompound', label: 'Compound of the fitted seal', options: compounds, optional: true };
 
 const odRange: AttributeField[] = [
   { type: 'number', key: 'fitsOd.minIn', label: 'Fits hose OD from', unit: 'in' },
@@ -28,6 +42,8 @@ export const attributeFields: Record<PartKind, AttributeField[]> = {
   hose: [
     { type: 'number', key: 'dash', label: 'Dash size' },
     { type: 'text', key: 'hoseType', label: 'Hose type', hint: 'The family of hose ends it takes, e.g. braided-rubber.' },
+    { type: 'choice', key: 'hoseClass', label: 'Standard class', options: hoseClasses, optional: true },
+    { type: 'multi-choice', key: 'endTypes', label: 'Hose ends made for it', options: endTypes, optional: true },
     { type: 'number', key: 'idIn', label: 'Inside diameter', unit: 'in' },
     { type: 'number', key: 'odIn', label: 'Outside diameter', unit: 'in' },
     { type: 'choice', key: 'liner', label: 'Liner', options: liners },
@@ -38,7 +54,8 @@ export const attributeFields: Record<PartKind, AttributeField[]> = {
   ],
   'hose-end': [
     { type: 'number', key: 'hoseDash', label: 'Hose dash size' },
-    { type: 'text-list', key: 'hoseTypes', label: 'Hose types it fits', hint: 'Comma-separated, e.g. braided-rubber, push-lock.' },
+    { type: 'text-list', key: 'hoseTypes', label: 'Hose types it fits', hint: 'Comma-separated, e.g. braided-rubber, cooler-hose.' },
+    { type: 'choice', key: 'endType', label: 'How it holds the hose', options: endTypes, optional: true },
     { type: 'connection', key: 'port', label: 'Port-side connection' },
     { type: 'angle', key: 'angle', label: 'Angle' },
     { type: 'number', key: 'allowanceIn', label: 'End allowance (seal point to hose cut face)', unit: 'in' },
@@ -53,16 +70,22 @@ export const attributeFields: Record<PartKind, AttributeField[]> = {
     { type: 'number', key: 'boreIn', label: 'Smallest bore', unit: 'in' },
     { type: 'text-list', key: 'features', label: 'Features', hint: 'Comma-separated, e.g. long-nose.' },
     { type: 'seal', key: 'seal', label: 'Seal needed' },
+    fittedSealCompound,
     { type: 'number', key: 'maxPressurePsi', label: 'Rated pressure', unit: 'psi', optional: true },
   ],
   plug: [
     { type: 'connection', key: 'connection', label: 'Connection' },
     { type: 'seal', key: 'seal', label: 'Seal needed' },
+    fittedSealCompound,
     { type: 'number', key: 'maxPressurePsi', label: 'Rated pressure', unit: 'psi', optional: true },
   ],
   clamp: odRange,
   sleeve: [...odRange, { type: 'number', key: 'maxTempF', label: 'Temperature rating', unit: '°F' }],
-  seal: [{ type: 'seal', key: 'seal', label: 'Seal' }],
+  seal: [
+    { type: 'seal', key: 'seal', label: 'Seal' },
+    { type: 'choice', key: 'compound', label: 'Compound', options: compounds, optional: true },
+    { type: 'number', key: 'hardnessShoreA', label: 'Hardness', unit: 'Shore A', optional: true },
+  ],
   bulkhead: [
     { type: 'connection', key: 'a', label: 'Connection A' },
     { type: 'connection', key: 'b', label: 'Connection B' },

@@ -14,5 +14,9 @@ export const referenceRowSchema = z.object({
   e0: z.number().positive().optional(),
   l2: z.number().positive().optional(),
   seal: z.string().optional(),
+  flankAngleDeg: z.union([z.literal(55), z.literal(60)]).optional(),
+  seatForms: z
+    .array(z.object({ seat: z.string().min(1), label: z.string().min(1), seal: z.string().optional(), tubeOdMm: z.number().positive().optional() }))
+    .optional(),
   source: z.string().min(1),
 }) satisfies z.ZodType<ReferenceRow>;

@@ -8,4 +8,6 @@ export const threadCandidateSchema = z.object({
   designation: z.string().min(1),
   score: z.number().min(0).max(1),
   hint: z.string(),
+  flankAngleDeg: z.union([z.literal(55), z.literal(60)]),
+  question: z.string().optional(),
 }) satisfies z.ZodType<ThreadCandidate>;

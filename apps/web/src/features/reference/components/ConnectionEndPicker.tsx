@@ -1,5 +1,16 @@
 import { Field, Radio, RadioGroup, Select, makeStyles, tokens } from '@fluentui/react-components';
-import { families, familyLabel, listSizes, type ConnectionSpec, type Family, type Gender } from '@linesmith/catalog';
+import {
+  changeConnection,
+  families,
+  familyLabel,
+  listSizes,
+  seatFormsOf,
+  seatOf,
+  type ConnectionSpec,
+  type Family,
+  type Gender,
+  type SeatForm,
+} from '@linesmith/catalog';
 
 export interface ConnectionEndPickerProps {
   legend: string;
@@ -21,16 +32,17 @@ const useStyles = makeStyles({
   legend: { fontWeight: tokens.fontWeightSemibold, padding: `0 ${tokens.spacingHorizontalXS}` },
 });
 
-/** Family, size and gender of one connection end; sizes are those of the chosen family's table. */
+/**
+ * Family, size, gender and (for metric and BSP parallel) seat form of one connection end; sizes
+ * are those of the chosen family's table made in the chosen seat form.
+ */
 export function ConnectionEndPicker({ legend, value, onChange }: ConnectionEndPickerProps) {
   const styles = useStyles();
-  const sizes = listSizes(value.family);
+  const seats = seatFormsOf(value.family);
+  const sizes = listSizes(value.family, seatOf(value));
 
-  function changeFamily(family: Family) {
-    const next = listSizes(family);
-    // Keep the size where the new family has it (-6 flare → -6 O-ring boss), else its first size.
-    onChange({ ...value, family, size: next.includes(value.size) ? value.size : (next[0] ?? '') });
-  }
+  // Keeps the size where the new family has it (-6 flare → -6 O-ring boss), else its first size.
+  const changeFamily = (family: Family) => onChange(changeConnection(value, { family }));
 
   return (
     <fieldset className={styles.root}>
@@ -44,6 +56,17 @@ export function ConnectionEndPicker({ legend, value, onChange }: ConnectionEndPi
           ))}
         </Select>
       </Field>
+      {seats.length > 0 && (
+        <Field label="Seat form">
+          <Select value={seatOf(value)} onChange={(_, data) => onChange(changeConnection(value, { seat: data.value as SeatForm }))}>
+            {seats.map((s) => (
+              <option key={s.seat} value={s.seat}>
+                {s.label}
+              </option>
+            ))}
+          </Select>
+        </Field>
+      )}
       <Field label="Size">
         <Select value={value.size} onChange={(_, data) => onChange({ ...value, size: data.value })}>
           {sizes.map((size) => (

@@ -26,8 +26,13 @@ export function MateResultView({ result }: MateResultViewProps) {
   const verdict = mateVerdicts[result.code];
   return (
     <div className={styles.root} role="status" aria-live="polite" aria-label="Joint check result">
-      <SeverityLabel level={verdict.level} text={verdict.text} />
+      <SeverityLabel level={result.caution ? 'caution' : verdict.level} text={result.caution ? 'Joins, with a caution' : verdict.text} />
       <Text>{result.message}</Text>
+      {result.caution && (
+        <Text>
+          <strong>Caution:</strong> {result.caution}
+        </Text>
+      )}
       {result.hint && (
         <Text>
           <strong>How to tell them apart:</strong> {result.hint}

@@ -280,6 +280,54 @@ describe('Reference › Joint checker', () => {
   });
 });
 
+describe('Reference › Joint checker, families of issue 14', () => {
+  const user = () => userEvent.setup();
+  const group = (end: 'End A' | 'End B') => screen.getByRole('group', { name: end });
+
+  it('offers every family by its plain name, none by its code', async () => {
+    openReference('joints');
+    await screen.findByRole('status', { name: 'Joint check result' });
+    const names = within(within(group('End A')).getByRole('combobox', { name: 'Family' }))
+      .getAllByRole('option')
+      .map((o) => o.textContent);
+    expect(names).toEqual(
+      expect.arrayContaining(['BSP parallel (ISO 228-1)', 'BSP taper (ISO 7-1)', 'O-ring face seal', 'NPTF dryseal pipe thread', 'Banjo bolt', 'Quick-connect (SAE J2044)']),
+    );
+    for (const name of names) expect(name).not.toMatch(/^(bspp|bspt|orfs|nptf|npsm|qc|banjo)$/);
+  });
+
+  it('1/4 BSPT male against 1/4 NPT female (ISO 7-1 19 TPI 55° vs ASME B1.20.1 18 TPI 60°): threads differ, with the flank-angle hint', async () => {
+    openReference('joints');
+    await screen.findByRole('status', { name: 'Joint check result' });
+    await user().selectOptions(within(group('End A')).getByRole('combobox', { name: 'Family' }), 'bspt');
+    await user().selectOptions(within(group('End A')).getByRole('combobox', { name: 'Size' }), '1/4');
+    await user().click(within(group('End A')).getByRole('radio', { name: 'Male' }));
+    await user().selectOptions(within(group('End B')).getByRole('combobox', { name: 'Family' }), 'npt');
+    await user().selectOptions(within(group('End B')).getByRole('combobox', { name: 'Size' }), '1/4');
+    await user().click(within(group('End B')).getByRole('radio', { name: 'Female' }));
+    const result = screen.getByRole('status', { name: 'Joint check result' });
+    expect(result).toHaveTextContent('Blocker: the threads differ');
+    expect(result).toHaveTextContent(/How to tell them apart:.*55°/);
+  });
+
+  it('M14x1.5 ISO 6149 O-ring port against a sealing-edge male: the seats differ; a seat form picker appears for metric', async () => {
+    openReference('joints');
+    await screen.findByRole('status', { name: 'Joint check result' });
+    for (const end of ['End A', 'End B'] as const) {
+      await user().selectOptions(within(group(end)).getByRole('combobox', { name: 'Family' }), 'metric');
+    }
+    await user().selectOptions(within(group('End A')).getByRole('combobox', { name: 'Seat form' }), 'o-ring');
+    await user().selectOptions(within(group('End A')).getByRole('combobox', { name: 'Size' }), 'M14x1.5');
+    await user().click(within(group('End A')).getByRole('radio', { name: 'Female' }));
+    await user().selectOptions(within(group('End B')).getByRole('combobox', { name: 'Seat form' }), 'sealing-edge');
+    await user().selectOptions(within(group('End B')).getByRole('combobox', { name: 'Size' }), 'M14x1.5');
+    await user().click(within(group('End B')).getByRole('radio', { name: 'Male' }));
+    const result = screen.getByRole('status', { name: 'Joint check result' });
+    expect(result).toHaveTextContent('Blocker: the seats differ');
+    expect(result).toHaveTextContent('ISO 6149');
+  });
+});
+
 describe('Reference › Rules', () => {
   it('lists every rule with its severity in words and what it checks', async () => {
     openReference('rules');

@@ -22,6 +22,7 @@ import {
   type IdentifyFormField,
   type IdentifyFormValues,
   type TaperAnswer,
+  type FlankAnswer,
   type ThreadMeasure,
 } from '../utils/identify-form-schema';
 import { MeasuringHelp } from './MeasuringHelp';
@@ -120,6 +121,13 @@ export function ThreadIdentifierSection() {
             <Radio value="unsure" label="Not sure" />
           </RadioGroup>
         </Field>
+        <Field label="Flank angle" hint="A 55° gauge seats in BSP threads, a 60° one in NPT, unified and metric">
+          <RadioGroup layout="horizontal" value={values.flank} onChange={(_, data) => set('flank', data.value as FlankAnswer)}>
+            <Radio value="55" label="55°" />
+            <Radio value="60" label="60°" />
+            <Radio value="unsure" label="Not checked" />
+          </RadioGroup>
+        </Field>
         <div className={styles.actions}>
           <Button
             type="submit"
@@ -148,6 +156,13 @@ export function ThreadIdentifierSection() {
           </Text>
           <MeasuringHelp />
         </>
+      )}
+      {identify.data?.find((c) => c.question) && (
+        <MessageBar intent="info" role="status">
+          <MessageBarBody>
+            <strong>55° or 60°?</strong> {identify.data.find((c) => c.question)?.question} Then answer “Which thread gauge seats” above and identify again.
+          </MessageBarBody>
+        </MessageBar>
       )}
       {identify.data && identify.data.length > 0 && <ThreadCandidatesTable candidates={identify.data} />}
     </div>

@@ -35,10 +35,22 @@ export function ThreadTableView({ table, unit }: ThreadTableViewProps) {
     pitchDiameter: rows.some((r) => r.basicPitchDiameterIn !== undefined),
     nptGauge: rows.some((r) => r.e0 !== undefined || r.l2 !== undefined),
     seal: rows.some((r) => r.seal !== undefined),
+    seatForms: rows.some((r) => r.seatForms !== undefined),
+    flank: rows.some((r) => r.flankAngleDeg !== undefined),
   };
   const length = (valueIn: number | undefined) => (valueIn === undefined ? '—' : formatTableLength(valueIn, unit));
   const majorHeader =
-    table.family === 'barb' ? 'Hose inside diameter' : table.family === 'npt' ? 'Pipe OD' : 'Major diameter';
+    table.family === 'barb'
+      ? 'Hose inside diameter'
+      : table.family === 'qc'
+        ? 'Tube OD'
+        : table.family === 'npt' || table.family === 'nptf'
+          ? 'Pipe OD'
+          : table.family === 'bspt'
+            ? 'Major diameter at the gauge plane'
+            : 'Major diameter';
+  const seatWords = (forms: NonNullable<(typeof rows)[number]['seatForms']>) =>
+    forms.map((f) => `${f.label}${f.tubeOdMm !== undefined ? `, ${f.tubeOdMm} mm tube` : ''}${f.seal ? `: ${f.seal}` : ''}`).join('; ');
   const sourceGroups = groupRowSources(rows);
 
   return (
@@ -56,7 +68,9 @@ export function ThreadTableView({ table, unit }: ThreadTableViewProps) {
             {has.pitchDiameter && <TableHeaderCell>Basic pitch diameter ({unit})</TableHeaderCell>}
             {has.nptGauge && <TableHeaderCell>E0, pitch diameter at small end ({unit})</TableHeaderCell>}
             {has.nptGauge && <TableHeaderCell>L2, effective thread length ({unit})</TableHeaderCell>}
-            {has.seal && <TableHeaderCell>Port seal</TableHeaderCell>}
+            {has.seal && !has.seatForms && <TableHeaderCell>Port seal</TableHeaderCell>}
+            {has.seatForms && <TableHeaderCell>Seat forms and their seals</TableHeaderCell>}
+            {has.flank && <TableHeaderCell>Flank angle</TableHeaderCell>}
           </TableRow>
         </TableHeader>
         <TableBody>
@@ -70,7 +84,9 @@ export function ThreadTableView({ table, unit }: ThreadTableViewProps) {
               {has.pitchDiameter && <TableCell className={styles.number}>{length(row.basicPitchDiameterIn)}</TableCell>}
               {has.nptGauge && <TableCell className={styles.number}>{length(row.e0)}</TableCell>}
               {has.nptGauge && <TableCell className={styles.number}>{length(row.l2)}</TableCell>}
-              {has.seal && <TableCell>{row.seal ?? '—'}</TableCell>}
+              {has.seal && !has.seatForms && <TableCell>{row.seal ?? '—'}</TableCell>}
+              {has.seatForms && <TableCell>{row.seatForms ? seatWords(row.seatForms) : '—'}</TableCell>}
+              {has.flank && <TableCell className={styles.number}>{row.flankAngleDeg === undefined ? '—' : `${row.flankAngleDeg}°`}</TableCell>}
             </TableRow>
           ))}
         </TableBody>

@@ -5,6 +5,8 @@ import { z } from 'zod';
 export type DiameterUnit = 'in' | 'mm';
 export type ThreadMeasure = 'tpi' | 'pitch';
 export type TaperAnswer = 'yes' | 'no' | 'unsure';
+/** Which thread gauge seats: 55° (BSP) or 60° (NPT, unified, metric). */
+export type FlankAnswer = '55' | '60' | 'unsure';
 
 export interface IdentifyFormValues {
   diameter: string;
@@ -12,6 +14,7 @@ export interface IdentifyFormValues {
   thread: string;
   threadMeasure: ThreadMeasure;
   tapers: TaperAnswer;
+  flank: FlankAnswer;
 }
 
 export type IdentifyFormField = 'diameter' | 'thread' | 'form';
@@ -22,6 +25,7 @@ export const emptyIdentifyForm: IdentifyFormValues = {
   thread: '',
   threadMeasure: 'tpi',
   tapers: 'unsure',
+  flank: 'unsure',
 };
 
 /*
@@ -57,6 +61,7 @@ export const identifyFormSchema = z
     thread: z.string().trim(),
     threadMeasure: z.enum(['tpi', 'pitch']),
     tapers: z.enum(['yes', 'no', 'unsure']),
+    flank: z.enum(['55', '60', 'unsure']).default('unsure'),
   })
   .transform((values, ctx): ThreadReading => {
     const reading: ThreadReading = {};
@@ -133,5 +138,7 @@ export const identifyFormSchema = z
     }
     // "Not sure" leaves the taper out, so both straight and tapered threads are ranked.
     if (values.tapers !== 'unsure') reading.tapered = values.tapers === 'yes';
+    // "Not sure" leaves the flank angle out: the identifier then asks about 55° against 60°.
+    if (values.flank !== 'unsure') reading.flankAngleDeg = values.flank === '55' ? 55 : 60;
     return reading;
   });

@@ -28,9 +28,34 @@ export const assemblyNotesByFamily: Readonly<Record<Family, readonly string[]>> 
     'Sealant or tape goes on pipe threads only — never on flare seats or O-ring joints (common practice).',
     'Do not back a tapered fitting off to align it; tighten past to the position instead (common practice).',
   ],
+  nptf: [
+    'Dryseal threads seal on the thread flanks and crests; between two NPTF ends a sealant is not needed, but a sealant rated for the fluid is common practice on fuel (common practice).',
+    'NPTF against NPT: use a sealant on the male thread, never on a flare or O-ring seat, and leak-test (common practice).',
+  ],
+  npsm: [
+    'NPSM swivels seal on the 30° seat, not the thread: no sealant or tape; check the male has the 30° seat before fitting (common practice).',
+  ],
+  bspp: [
+    'BSP parallel ports seal on a washer, O-ring or cone, not the thread: no sealant or tape on the threads (common practice).',
+    'Use a new bonded washer or O-ring of a compound rated for the fluid each time (common practice).',
+  ],
+  bspt: [
+    'BSP taper threads seal on the thread: use a sealant rated for the fluid on the male thread only; never mix with NPT (55° against 60° flanks) (common practice).',
+  ],
+  orfs: [
+    'The face O-ring seals: fit a new O-ring of the right compound in the groove, keep it in place with a little system fluid, and tighten the nut face to face; no sealant (common practice).',
+  ],
   metric: [
-    'Metric ports seal with an O-ring or a sealing washer: no sealant or tape on the threads (common practice).',
-    'Use a new sealing washer or O-ring each time; lubricate O-rings with the system fluid (common practice).',
+    'Metric ports seal with an O-ring, a washer, a sealing edge or a 24° cone: no sealant or tape on the threads (common practice).',
+    'Use a new sealing washer or O-ring each time, of a compound rated for the fluid; lubricate O-rings with the system fluid (common practice).',
+  ],
+  banjo: [
+    'Fit a new crush washer on each face of the banjo eye (two per joint); tighten the bolt to the maker’s value, no sealant (common practice).',
+    'Check the bolt’s cross drilling is clear and lines up with the eye’s groove before fitting (common practice).',
+  ],
+  qc: [
+    'Push the end form in until the retainer locks, then pull back to check it holds; replace a damaged retainer (common practice).',
+    'Keep the end form clean and free of nicks: the seal is on the O-rings inside the connector (common practice).',
   ],
   barb: [
     'Push the hose fully over the barb and clamp behind the last barb ridge with a clamp sized for the hose OD; no sealant (common practice).',

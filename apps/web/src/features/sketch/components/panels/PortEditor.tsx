@@ -1,5 +1,5 @@
 import { Button, Checkbox, Field, makeStyles, Select, tokens } from '@fluentui/react-components';
-import { families, familyLabel, listSizes, type Family, type Gender } from '@linesmith/catalog';
+import { changeConnection, families, familyLabel, listSizes, seatFormsOf, seatOf, type Family, type Gender, type SeatForm } from '@linesmith/catalog';
 import { portRoleSchema, type CircuitPort, type PortRole } from '@linesmith/routing';
 import { useEditor } from '../../hooks/editor-context';
 import { deletePort } from '../../model/commands/delete-port';
@@ -24,12 +24,10 @@ export function PortEditor({ unitId, port, highlighted }: PortEditorProps) {
   const styles = useStyles();
   const { store } = useEditor();
   const ref = { unitId, portId: port.id };
-  const setSpec = (change: Partial<CircuitPort['connection']>) => {
-    const next = { ...port.connection, ...change };
-    // A new family keeps the size only where that family has it.
-    if (change.family && !listSizes(change.family).includes(next.size)) next.size = listSizes(change.family)[0];
-    store.run(setConnectionSpec, { ...ref, connection: next });
-  };
+  // A new family keeps the size only where that family (and seat form) has it.
+  const setSpec = (change: Partial<CircuitPort['connection']>) =>
+    store.run(setConnectionSpec, { ...ref, connection: changeConnection(port.connection, change) });
+  const seats = seatFormsOf(port.connection.family);
   const name = port.label || 'port';
   return (
     <fieldset className={`${styles.box} ${highlighted ? styles.highlighted : ''}`} aria-label={`Port ${name}`}>
@@ -48,7 +46,7 @@ export function PortEditor({ unitId, port, highlighted }: PortEditorProps) {
         </Field>
         <Field label="Size" size="small">
           <Select size="small" value={port.connection.size} onChange={(_, d) => setSpec({ size: d.value })}>
-            {listSizes(port.connection.family).map((size) => (
+            {listSizes(port.connection.family, seatOf(port.connection)).map((size) => (
               <option key={size} value={size}>
                 {size}
               </option>
@@ -62,6 +60,17 @@ export function PortEditor({ unitId, port, highlighted }: PortEditorProps) {
           </Select>
         </Field>
       </div>
+      {seats.length > 0 && (
+        <Field label="Seat form" size="small" hint="How the port seals: the thread alone does not say.">
+          <Select size="small" value={seatOf(port.connection)} onChange={(_, d) => setSpec({ seat: d.value as SeatForm })}>
+            {seats.map((s) => (
+              <option key={s.seat} value={s.seat}>
+                {s.label}
+              </option>
+            ))}
+          </Select>
+        </Field>
+      )}
       <Field label="Role" size="small">
         <Select size="small" value={port.role} onChange={(_, d) => store.run(updatePort, { ...ref, changes: { role: d.value as PortRole } })}>
           {portRoleSchema.options.map((r) => (
