@@ -5,7 +5,7 @@ import type { ShopRules } from '../rules/shop-rules.js';
 import type { BillOfMaterials, BomRow } from './bom-row.js';
 import { taxOf } from './order-sheet.js';
 import { priceOf } from './price.js';
-import { plugSealNeeds, sealDescription, sealKey, stackSealNeeds } from './seal-needs.js';
+import { plugSealNeeds, SealCatalogue, sealDescription, sealKey, sealPartDescription, stackSealNeeds, suitedSealCatalogue, type SealService } from './seal-needs.js';
 
 const KIND_ORDER: readonly PartKind[] = ['hose', 'hose-end', 'adapter', 'bulkhead', 'plug', 'seal', 'clamp', 'sleeve'];
 
@@ -27,6 +27,8 @@ export interface BomInput {
   rules: ShopRules;
   /** The shop's sales tax rate in percent (from the shop profile, not the shop rules). */
   taxRatePercent: number;
+  /** The circuit's fluid and temperature, which pick each seal's compound. */
+  seals?: SealService;
 }
 
 /** One addition to a bill of materials: what one line (or one plugged port) takes of one row. */
@@ -43,15 +45,12 @@ export interface BomEntry {
   cut?: true;
 }
 
-/** The shop's seal parts by seal (the first of each), for the seals the ports and adapters need. */
-export function sealCatalogueOf(parts: ReadonlyMap<string, Part>): ReadonlyMap<string, Part> {
-  const sealCatalogue = new Map<string, Part>();
-  for (const part of parts.values()) {
-    if (part.kind === 'seal' && !part.retired && !sealCatalogue.has(sealKey(part.attributes.seal))) {
-      sealCatalogue.set(sealKey(part.attributes.seal), part);
-    }
-  }
-  return sealCatalogue;
+/**
+ * The shop's seal parts by seal, for the seals the ports and adapters need: of several parts of
+ * one size, the first whose compound suits the circuit's fluid and temperature (see seal-needs).
+ */
+export function sealCatalogueOf(parts: ReadonlyMap<string, Part>, service?: SealService): ReadonlyMap<string, Part> {
+  return suitedSealCatalogue(parts, service);
 }
 
 const partEntry = (part: Part, unit: 'in' | 'each', quantity: number, lineId?: string): BomEntry => ({
@@ -66,8 +65,11 @@ const partEntry = (part: Part, unit: 'in' | 'each', quantity: number, lineId?: s
 
 function sealEntry(need: SealNeed, sealCatalogue: ReadonlyMap<string, Part>, lineId?: string): BomEntry {
   const part = sealCatalogue.get(sealKey(need));
+  if (part?.kind === 'seal') return { ...partEntry(part, 'each', 1, lineId), description: sealPartDescription(part) };
   if (part) return partEntry(part, 'each', 1, lineId);
-  return { key: `seal:${sealKey(need)}`, part: undefined, kind: 'seal', description: `${sealDescription(need)} (not in the catalogue)`, unit: 'each', quantity: 1, lineId };
+  // Not in the catalogue: the row names the compound to buy for the circuit's fluid.
+  const buy = sealCatalogue instanceof SealCatalogue ? sealCatalogue.compoundToBuy : undefined;
+  return { key: `seal:${sealKey(need)}`, part: undefined, kind: 'seal', description: `${sealDescription(need, buy)} (not in the catalogue)`, unit: 'each', quantity: 1, lineId };
 }
 
 /** What one line adds to the bill: its hose cut, end stacks and their seals, clamps and sleeves. */
@@ -179,7 +181,7 @@ export function finishBom(unsorted: readonly BomRow[], taxRatePercent: number): 
  */
 export function billOfMaterials(input: BomInput): BillOfMaterials {
   const { parts, rules } = input;
-  const sealCatalogue = sealCatalogueOf(parts);
+  const sealCatalogue = sealCatalogueOf(parts, input.seals);
   const lists: BomEntry[][] = [];
   for (const line of input.lines) lists.push(lineBomEntries(line, parts, rules, sealCatalogue));
   for (const port of input.ports) lists.push(portBomEntries(port, input.connectedPorts.has(port.key), parts, sealCatalogue));

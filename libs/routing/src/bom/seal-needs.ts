@@ -90,12 +90,19 @@ export function sealSuitability(part: PartOf<'seal'>, service: SealService | und
   return compoundProblem(compound, service.fluid, service.maxTempF) === undefined ? 0 : 2;
 }
 
+/** Seal parts by seal size, and the compound to buy for a size the catalogue lacks. */
+export class SealCatalogue extends Map<string, PartOf<'seal'>> {
+  constructor(readonly compoundToBuy: string | undefined) {
+    super();
+  }
+}
+
 /**
  * The shop's seal parts by seal size, the one that best suits the fluid and temperature of each
  * (catalogue order among equals), for the seals the ports and adapters need.
  */
-export function suitedSealCatalogue(parts: ReadonlyMap<string, Part> | Iterable<Part>, service: SealService | undefined): Map<string, PartOf<'seal'>> {
-  const chosen = new Map<string, PartOf<'seal'>>();
+export function suitedSealCatalogue(parts: ReadonlyMap<string, Part> | Iterable<Part>, service: SealService | undefined): SealCatalogue {
+  const chosen = new SealCatalogue(compoundToBuy(service));
   const all = parts instanceof Map ? parts.values() : (parts as Iterable<Part>);
   for (const part of all) {
     if (part.kind !== 'seal' || part.retired) continue;
@@ -111,4 +118,16 @@ export function compoundToBuy(service: SealService | undefined): string | undefi
   if (!service) return undefined;
   const best = suitableCompounds(service.fluid, service.maxTempF)[0];
   return best === undefined ? undefined : sealCompoundLabels[best];
+}
+
+/**
+ * A seal part as the bill of materials names it: its description, plus its hardness and compound
+ * where the description does not already say them ("O-ring AS568-906 (90 Shore A fluorocarbon)").
+ */
+export function sealPartDescription(part: PartOf<'seal'>): string {
+  const { compound, hardnessShoreA } = part.attributes;
+  if (compound === undefined) return part.description;
+  const label = sealCompoundLabels[compound];
+  if (part.description.toLowerCase().includes(label.toLowerCase())) return part.description;
+  return `${part.description} (${hardnessShoreA === undefined ? '' : `${hardnessShoreA} Shore A `}${label})`;
 }

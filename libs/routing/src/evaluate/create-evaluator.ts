@@ -96,7 +96,8 @@ function upperBound(sorted: readonly Flag[], flag: Flag): number {
 export function createEvaluator(parts: readonly Part[], shopRules: ShopRules, options: EvaluateOptions = {}): CircuitEvaluator {
   const partsById = new Map(parts.map((p) => [p.id, p]));
   const clamps = parts.filter((p) => p.kind === 'clamp' && !p.retired);
-  const sealCatalogue = sealCatalogueOf(partsById);
+  // Seals are picked for the circuit's fluid and temperature: worked out again when they change.
+  let sealCatalogue = sealCatalogueOf(partsById);
   const taxRatePercent = options.taxRatePercent ?? 0;
   const byItem = ruleRegistry.filter(splitsByItem);
   const wholeCircuit = ruleRegistry.filter((r) => !splitsByItem(r));
@@ -158,6 +159,7 @@ export function createEvaluator(parts: readonly Part[], shopRules: ShopRules, op
       reset();
       scale = usableScaleOf(doc);
       zones = prepareDocZones(doc, shopRules, scale);
+      sealCatalogue = sealCatalogueOf(partsById, { fluid: doc.circuit.fluid, maxTempF: doc.circuit.maxTempF });
     }
     setting = now;
     const fresh = !settled;

@@ -89,6 +89,7 @@ export function evaluateCircuit(
     parts: ctx.parts,
     rules: shopRules,
     taxRatePercent: options.taxRatePercent ?? 0,
+    seals: { fluid: doc.circuit.fluid, maxTempF: doc.circuit.maxTempF },
   });
   return { lines: ctx.lines.map((l) => l.report), flags, bom };
 }

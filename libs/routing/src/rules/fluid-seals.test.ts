@@ -38,8 +38,24 @@ describe('fluid rule: seals by compound', () => {
     }
   });
 
-  it('with a fluorocarbon AS568-906 in the catalogue as well, the seal check passes', () => {
-    expect(fluidFlags(e85([...testParts, ptfeHose, fkm906]))).toEqual([]);
+  it('with a fluorocarbon AS568-906 in the catalogue as well, the seal check passes and the bill takes the fluorocarbon one, naming it', () => {
+    const result = e85([...testParts, ptfeHose, fkm906]);
+    expect(fluidFlags(result)).toEqual([]);
+    const seal = result.bom.rows.find((r) => r.kind === 'seal');
+    expect(seal?.partId).toBe('oring-906-fkm');
+    expect(seal?.description).toBe('O-ring AS568-906 (90 Shore A fluorocarbon)');
+  });
+
+  it('on ATF the bill keeps the nitrile O-ring (first suitable in catalogue order)', () => {
+    const result = evaluateCircuit(coolerCircuit(), [...testParts, fkm906], defaultShopRules);
+    expect(result.bom.rows.find((r) => r.kind === 'seal')?.partId).toBe('oring-906');
+  });
+
+  it('a seal the catalogue lacks is listed with the compound to buy for the fluid', () => {
+    const result = e85(
+      [...testParts.filter((p) => p.id !== 'oring-906'), ptfeHose],
+    );
+    expect(result.bom.rows.find((r) => r.kind === 'seal')?.description).toBe('O-ring AS568-906, fluorocarbon (not in the catalogue)');
   });
 
   it('a nitrile O-ring listed in the end stack itself is a blocker at its place in the stack', () => {
