@@ -32,7 +32,27 @@ export async function openBrowser(): Promise<BrowserContext> {
   });
   // A step that waits in vain fails with its locator named, well before the test's own time-out.
   context.setDefaultTimeout(20_000);
+  failOnPolicyViolations(context);
   return context;
+}
+
+/**
+ * The server's Content-Security-Policy allows run-time styles by nonce only. Any style, script or
+ * image the policy refused on any page of the journey fails it when its browser closes.
+ */
+function failOnPolicyViolations(context: BrowserContext): void {
+  const refused: string[] = [];
+  const watch = (page: Page) =>
+    page.on('console', (message) => {
+      if (/Content Security Policy/i.test(message.text())) refused.push(`${page.url()}: ${message.text()}`);
+    });
+  context.pages().forEach(watch);
+  context.on('page', watch);
+  const close = context.close.bind(context);
+  context.close = async (options) => {
+    await close(options);
+    if (refused.length) throw new Error(`the Content-Security-Policy refused ${refused.length} item(s):\n${refused.slice(0, 5).join('\n')}`);
+  };
 }
 
 export async function signIn(page: Page, email: string, password = demoPassword): Promise<void> {
