@@ -36,6 +36,21 @@ describe('Accept an invitation', () => {
     expect(fetchMock.callsTo('POST', '/api/auth/accept-invite')[0].body).toEqual({ token, password: 'short-one-now-long' });
   });
 
+  it('shows the server\'s refusal of a common password at the password field', async () => {
+    const fetchMock = createFetchMock().on('POST', '/api/auth/accept-invite', () =>
+      errorResponse(400, 'validation_failed', 'Some fields are not valid.', {
+        issues: [{ path: 'password', message: 'This password is too common or too easy to guess. Try a few unrelated words.' }],
+      }),
+    );
+    renderApp({ path: `/accept-invite?token=${token}`, user: null, fetchMock });
+    const user = userEvent.setup();
+    const form = await screen.findByRole('form', { name: 'Choose a password' });
+    await user.type(within(form).getByLabelText(/New password/), 'password123');
+    await user.type(within(form).getByLabelText(/Repeat the password/), 'password123');
+    await user.click(within(form).getByRole('button', { name: 'Set password and sign in' }));
+    expect(await within(form).findByText(/too common or too easy to guess/)).toBeInTheDocument();
+  });
+
   it('says an expired link is no longer valid', async () => {
     const fetchMock = createFetchMock().on('POST', '/api/auth/accept-invite', () =>
       errorResponse(400, 'invalid_token', 'The link has expired.'),

@@ -1,5 +1,6 @@
 import { Button, Field, Input, MessageBar, MessageBarBody, Spinner, makeStyles, tokens } from '@fluentui/react-components';
 import { useState, type FormEvent } from 'react';
+import { ApiError } from '../../../lib/api-error';
 import { fieldErrors } from '../../../lib/field-errors';
 import { minPasswordLength, newPasswordFormSchema, type NewPasswordFormValues } from '../utils/new-password-form-schema';
 
@@ -33,7 +34,10 @@ export function NewPasswordForm({ submitLabel, onSubmit, describeFailure }: NewP
     try {
       await onSubmit(parsed.data.password);
     } catch (error) {
-      setFailure(describeFailure(error));
+      // The server also refuses common and easily guessed passwords: say so at the field.
+      const passwordIssue = error instanceof ApiError ? fieldErrors<keyof NewPasswordFormValues>(error.issues).password : undefined;
+      if (passwordIssue) setErrors({ password: passwordIssue });
+      else setFailure(describeFailure(error));
     } finally {
       setSubmitting(false);
     }
