@@ -35,5 +35,6 @@ export {
 } from './bom/order-sheet.js';
 export * from './evaluate/evaluate-circuit.js';
 export { createEvaluator, type CircuitEvaluator } from './evaluate/create-evaluator.js';
+export * from './evaluate/work-budget.js';
 export { flagKey } from './rules/flag-key.js';
 export * from './compare/compare-documents.js';
