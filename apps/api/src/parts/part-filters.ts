@@ -27,17 +27,19 @@ export interface PartFilter {
 export type PartSortKey = 'description' | 'kind' | 'supplierPartNumber' | 'priceCents' | 'stockOnHand';
 
 /**
- * The tube size of an end in sixteenths of an inch: dash families name it, flare families name
- * the tube OD in inches (a dash size is the tube OD in sixteenths, DOMAIN §1).
+ * The tube size of an end in sixteenths of an inch: dash families name it, flare families and
+ * inch quick-connects name the tube OD in inches (a dash size is the tube OD in sixteenths, DOMAIN §1).
  */
 function dashOfEnd(end: ConnectionSpec): number | undefined {
   switch (end.family) {
     case 'flare37':
     case 'orb':
+    case 'orfs':
     case 'barb':
       return parseDash(end.size);
     case 'flare45':
-    case 'invflare45': {
+    case 'invflare45':
+    case 'qc': {
       const tubeOdIn = parseFractionIn(end.size);
       return tubeOdIn === undefined ? undefined : tubeOdIn * 16;
     }

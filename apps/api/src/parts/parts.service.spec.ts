@@ -80,11 +80,11 @@ describe('PartsService', () => {
     it('filters the shop catalogue, sorts with numbers in order and pages', async () => {
       const page = await service.list(SHOP, query({ kind: 'hose', pageSize: 3 }));
       expect(catalogue.partsOf).toHaveBeenCalledWith(SHOP);
-      expect(page).toMatchObject({ total: 4, page: 1, pageSize: 3 });
-      // By description: "-6 CPE…", "-6 PTFE…", "-8 CPE…", then "-8 PTFE…" on page 2.
-      expect(page.items.map((part) => part.id)).toEqual(['demo-hose-6-rubber', 'demo-hose-6-ptfe', 'demo-hose-8-rubber']);
+      expect(page).toMatchObject({ total: 5, page: 1, pageSize: 3 });
+      // By description: "-6 CPE…", "-6 PTFE…", "-6 Transmission oil cooler…", then "-8 CPE…", "-8 PTFE…" on page 2.
+      expect(page.items.map((part) => part.id)).toEqual(['demo-hose-6-rubber', 'demo-hose-6-ptfe', 'demo-hose-6-cooler']);
       const last = await service.list(SHOP, query({ kind: 'hose', pageSize: 3, page: 2 }));
-      expect(last.items.map((part) => part.id)).toEqual(['demo-hose-8-ptfe']);
+      expect(last.items.map((part) => part.id)).toEqual(['demo-hose-8-rubber', 'demo-hose-8-ptfe']);
       const dearest = await service.list(SHOP, query({ kind: 'hose', sort: 'priceCents', direction: 'desc', pageSize: 1 }));
       expect(dearest.items[0].id).toBe('demo-hose-8-ptfe');
     });

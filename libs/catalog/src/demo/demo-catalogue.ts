@@ -354,6 +354,7 @@ const sealRows: SealRow[] = [
   { id: 'demo-oring-906-fkm', pn: 'RF-40108', seal: oring('906'), compound: 'fluorocarbon', hardnessShoreA: 90, price: 690 },
   { id: 'demo-oring-908-fkm', pn: 'RF-40109', seal: oring('908'), compound: 'fluorocarbon', hardnessShoreA: 90, price: 740 },
   { id: 'demo-oring-910-fkm', pn: 'RF-40110', seal: oring('910'), compound: 'fluorocarbon', hardnessShoreA: 90, price: 790 },
+  { id: 'demo-oring-m22-fkm', pn: 'RF-40113', seal: oring('ISO 6149-1 M22x1.5 (19.3x2.2)'), compound: 'fluorocarbon', hardnessShoreA: 90, price: 880 }, // hot engine oil (300 °F) is past nitrile
   { id: 'demo-oring-m14', pn: 'RF-40111', seal: oring('ISO 6149-1 M14x1.5 (11.3x2.2)'), compound: 'nitrile', hardnessShoreA: 90, price: 480 },
   { id: 'demo-oring-orfs-012', pn: 'RF-40112', seal: oring('012'), compound: 'nitrile', hardnessShoreA: 90, price: 330 },
   { id: 'demo-bonded-washer-m14', pn: 'HL-40031', seal: washer('bonded-washer', 'M14'), compound: 'nitrile', price: 360 },
