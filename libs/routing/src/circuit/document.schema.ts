@@ -44,7 +44,12 @@ export const unitKindSchema = z.enum([
   'valve',
 ]);
 export const mountGroupSchema = z.enum(['powertrain', 'chassis', 'axle']);
-export const portRoleSchema = z.enum(['out', 'return', 'feed', 'drain', 'vent']);
+/**
+ * What a port does, which fixes the way fluid flows through it: `out` (outlet), `feed` (a supply
+ * port feeding another unit) and `drain` send fluid out; `in` (inlet) and `return` (fluid coming back
+ * to its own unit) take it in; `vent` breathes air. Bulkhead plates pass fluid either way.
+ */
+export const portRoleSchema = z.enum(['out', 'in', 'return', 'feed', 'drain', 'vent']);
 export const heatZoneKindSchema = z.enum(['exhaust', 'turbo', 'other']);
 
 /** The catalogue's requirement (what the part must carry) plus why the port asks for it, shown in the flag. */
@@ -65,6 +70,12 @@ export const portSchema = z.object({
   feedsLubrication: z.boolean().optional(),
   /** A plug closing an unused port. */
   plugPartId: id.nullable().optional(),
+  /** Usable full thread depth from the port face: a fitting reaching further bottoms out. */
+  threadDepthIn: inches.positive().optional(),
+  /** Depth from the port face at which an internal passage crosses the bore: a fitting reaching it blocks the passage. */
+  passageDepthIn: inches.positive().optional(),
+  /** Least reach the port needs (e.g. a long-nose fitting reaching into the passage that feeds lubrication). */
+  minReachIn: inches.positive().optional(),
 });
 
 export const unitSchema = z.object({
@@ -125,6 +136,8 @@ export const heatZoneSchema = z.object({
   polygon: z.array(sketchPointSchema).min(3, 'A heat zone needs at least 3 points').max(L.zonePoints),
   /** Inches; when absent the shop's clearance for the zone kind applies. */
   clearanceIn: inches.optional(),
+  /** A heat shield stands between this hot part and the lines: contact becomes a caution for the reviewer. */
+  shielded: z.boolean().optional(),
 });
 
 export const calibrationSchema = z

@@ -4,6 +4,9 @@ import { isBelow } from './compare.js';
 import type { Flag } from './flag.js';
 import { endName, partName, type Rule } from './rule.js';
 
+/** A radius as a maker's table gives it: decimals to the thousandth (2.155), not a tape fraction that could hide the shortfall. */
+const radiusText = (valueIn: number): string => String(Number(valueIn.toFixed(3)));
+
 /** "adapters 1/2 in + hose end 1-1/4 in" — what the rigid length at one end is made of. */
 export function rigidWords(end: RigidEnd): string {
   const parts: string[] = [];
@@ -33,14 +36,14 @@ export const bendRadiusRule: Rule = {
           const corner = bend.pointIndex - 1; // route point 0 is the from port
           const radii =
             check.basis === 'inside'
-              ? `its inside radius is ${formatInches(check.insideIn)} in (centreline ${formatInches(check.centrelineIn)} in less half the ${formatInches(hose.attributes.odIn)} in hose OD)`
-              : `its centreline radius is ${formatInches(check.centrelineIn)} in (inside ${formatInches(check.insideIn)} in)`;
+              ? `its inside radius is ${radiusText(check.insideIn)} in (centreline ${radiusText(check.centrelineIn)} in less half the ${radiusText(hose.attributes.odIn)} in hose OD)`
+              : `its centreline radius is ${radiusText(check.centrelineIn)} in (inside ${radiusText(check.insideIn)} in)`;
           flags.push({
             code: 'bend-radius',
             severity: 'blocker',
-            message: `Corner ${corner + 1}: ${radii}; ${partName(hose)} needs at least ${formatInches(check.minIn)} in, quoted to the ${check.basis === 'inside' ? 'inside of the bend' : 'centreline'}.`,
+            message: `Corner ${corner + 1}: ${radii}; ${partName(hose)} needs at least ${radiusText(check.minIn)} in, quoted to the ${check.basis === 'inside' ? 'inside of the bend' : 'centreline'}.`,
             target: { kind: 'line', id: lineId, lineId, index: corner },
-            fix: `Open the bend up to at least ${formatInches(check.minIn + (check.basis === 'inside' ? hose.attributes.odIn / 2 : 0))} in centreline radius, add a 45° or 90° hose end, or reroute.`,
+            fix: `Open the bend up to at least ${radiusText(check.minIn + (check.basis === 'inside' ? hose.attributes.odIn / 2 : 0))} in centreline radius, add a 45° or 90° hose end, or reroute.`,
           });
         }
         const fit = hoseFit(line, ctx.rules);

@@ -40,12 +40,23 @@ function pathToLubrication(ctx: RuleContext, valveId: string): { first: LineAnal
   return undefined;
 }
 
+/** What a valve of this kind does and what its failure does to the path, in shop words. */
+function failureWords(valveKind: string, lubePort: string): string {
+  if (/thermostat|bypass/i.test(valveKind)) {
+    return (
+      `a thermostatic bypass normally passes flow at every temperature — round the cooler while the fluid is cold, through it once warm. ` +
+      `If it sticks in bypass the fluid reaching ${lubePort} goes uncooled; if it sticks shut or clogs it blocks the cooler path, and ${lubePort} gets less flow or none.`
+    );
+  }
+  return `if it sticks shut or clogs, the path to ${lubePort} gets less flow or none; if it sticks open the circuit runs as if it were not there.`;
+}
+
 export const lubePathValveRule: Rule = {
   code: 'lube-path-valve',
   severity: 'caution',
   title: 'Valve in a lubrication path',
   description:
-    'A valve (for example a thermostatic bypass) in a circuit whose fluid goes on to lubricate a gear train: if the valve sticks, the gear train starves. Common practice is to keep such paths free of valves, or to use a valve that fails open.',
+    'A valve (for example a thermostatic bypass) in a circuit whose fluid goes on to lubricate a gear train. Such a valve normally passes flow all the time; the risk is its failure: stuck in bypass, the fluid returns uncooled; stuck shut or clogged, it blocks the cooler path and the lubrication downstream gets less flow or none. Common practice is to keep such paths free of valves, or to use one whose maker allows it in this place.',
   check(ctx) {
     const flags: Flag[] = [];
     for (const unit of ctx.doc.units) {
@@ -55,9 +66,9 @@ export const lubePathValveRule: Rule = {
       flags.push({
         code: 'lube-path-valve',
         severity: 'caution',
-        message: `${unit.label || unit.id} (${unit.valveKind}) sits in the path to ${found.port}, which feeds lubrication: if it sticks, that path starves.`,
+        message: `${unit.label || unit.id} (${unit.valveKind}) sits in the path to ${found.port}, which feeds lubrication: ${failureWords(unit.valveKind, found.port)}`,
         target: lineTarget(found.first.line.id),
-        fix: 'Move the valve out of the lubrication path, use a fail-open valve, or have the reviewer confirm the maker allows it.',
+        fix: 'Move the valve out of the lubrication path, use a valve whose maker allows it here (one that fails to the bypass side), or have the reviewer confirm it.',
       });
     }
     return flags;

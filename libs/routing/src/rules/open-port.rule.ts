@@ -17,7 +17,7 @@ export const openPortRule: Rule = {
   severity: 'caution',
   title: 'Open port',
   description:
-    'A port with no line and no plug: fluid will leak out or dirt will get in. A plug that is not in the catalogue, is not a plug, or does not fit the port leaves the port open under pressure, which is a blocker.',
+    'A port with no line and no plug: fluid will leak out or dirt will get in. A vent left open is a note, since it is meant to breathe. A plug that is not in the catalogue, is not a plug, or does not fit the port leaves the port open under pressure, which is a blocker.',
   check(ctx) {
     const flags: Flag[] = [];
     for (const entry of ctx.ports.values()) {
@@ -25,6 +25,16 @@ export const openPortRule: Rule = {
       const name = `Port ${entry.port.label || entry.port.id} on ${entry.unit.label || entry.unit.id}`;
       const target = portTarget(entry.unit.id, entry.port.id);
       const plugId = entry.port.plugPartId;
+      if (!plugId && entry.port.role === 'vent') {
+        flags.push({
+          code: 'open-port',
+          severity: 'note',
+          message: `${name} is a vent left open to breathe.`,
+          target,
+          fix: 'Fit a breather or a vent line where dirt or water could get in; plug it only if the unit’s maker says so.',
+        });
+        continue;
+      }
       if (!plugId) {
         flags.push({
           code: 'open-port',

@@ -2,6 +2,7 @@ import { bendNearSocketRule } from './bend-near-socket.rule.js';
 import { bendRadiusRule } from './bend-radius.rule.js';
 import { freeHoseLengthRule } from './free-hose-length.rule.js';
 import { measuredLengthRule } from './measured-length.rule.js';
+import { flowDirectionRule } from './flow-direction.rule.js';
 import { fluidRule } from './fluid.rule.js';
 import { heatContactRule } from './heat-contact.rule.js';
 import { heatSleeveRule } from './heat-sleeve.rule.js';
@@ -15,6 +16,7 @@ import { lubePathValveRule } from './lube-path-valve.rule.js';
 import { missingPartRule } from './missing-part.rule.js';
 import { noSlackRule } from './no-slack.rule.js';
 import { openPortRule } from './open-port.rule.js';
+import { portReachRule } from './port-reach.rule.js';
 import { portRequirementRule } from './port-requirement.rule.js';
 import { ratingPressureRule } from './rating-pressure.rule.js';
 import { ratingTemperatureRule } from './rating-temperature.rule.js';
@@ -30,6 +32,7 @@ export const ruleRegistry: readonly Rule[] = [
   jointGenderRule,
   jointCautionRule,
   portRequirementRule,
+  portReachRule,
   hoseEndSizeRule,
   ratingPressureRule,
   ratingTemperatureRule,
@@ -44,6 +47,7 @@ export const ruleRegistry: readonly Rule[] = [
   restrictionRule,
   lubePathValveRule,
   openPortRule,
+  flowDirectionRule,
   noSlackRule,
   scaleMissingRule,
   incompleteLineRule,

@@ -156,7 +156,7 @@ export function coolerCircuitInput(): CircuitDocumentInput {
         rotation: 0,
         mountGroup: 'chassis',
         ports: [
-          { id: 'in', label: 'in', connection: { family: 'flare37', size: '-6', gender: 'male' }, role: 'feed', dx: 0, dy: 0 },
+          { id: 'in', label: 'in', connection: { family: 'flare37', size: '-6', gender: 'male' }, role: 'in', dx: 0, dy: 0 },
           { id: 'out', label: 'out', connection: { family: 'flare37', size: '-6', gender: 'male' }, role: 'out', dx: 0, dy: 200 },
         ],
       },
