@@ -45,6 +45,17 @@ describe('ShopRulesService', () => {
     expect(rules.supportSpacingIn).toBe(18);
   });
 
+  it('reads a row saved before the spacing table: a uniform spacing the shop chose fills the table, new slack rules default', async () => {
+    // Stored as it was before the table (FAA AC 43.13-1B Table 9-3) and the same-mount slack existed.
+    repo.findOneBy.mockResolvedValue(row(5, { supportSpacingIn: 24, slackMinIn: 2, slackPercent: 4 } as unknown as typeof defaultShopRules));
+    const rules = await service.rulesOf(SHOP);
+    expect(rules.supportSpacingByDashIn['6']).toBe(24);
+    expect(rules.supportSpacingByDashIn['16']).toBe(24);
+    expect(rules.slackMinSameMountIn).toBe(0.5); // common practice default
+    repo.findOneBy.mockResolvedValue(row(6, { supportSpacingIn: 18 } as unknown as typeof defaultShopRules));
+    expect((await service.rulesOf(SHOP)).supportSpacingByDashIn).toEqual(defaultShopRules.supportSpacingByDashIn);
+  });
+
   it('inserts the first save at version 0 and updates later saves with a version guard', async () => {
     const rules = { ...defaultShopRules, supportSpacingIn: 12 };
     repo.findOneBy.mockResolvedValueOnce(null).mockResolvedValueOnce(row(1, rules));

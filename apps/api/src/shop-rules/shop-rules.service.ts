@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { defaultShopRules, shopRuleOrigins, shopRulesSchema, type ShopRules } from '@linesmith/routing';
+import { defaultShopRules, migrateShopRules, shopRuleOrigins, type ShopRules } from '@linesmith/routing';
 import type { Repository } from 'typeorm';
 import { ConflictError } from '../common/errors/app-error.js';
 import { isUniqueViolation } from '../common/errors/unique-violation.js';
@@ -29,7 +29,7 @@ export class ShopRulesService {
     const hit = this.parsed.get(shopId);
     if (hit?.json === json) return hit.rules;
     // Parsed again on read: rules added to the schema later take their defaults in old rows.
-    const rules = shopRulesSchema.parse(JSON.parse(json));
+    const rules = migrateShopRules(JSON.parse(json));
     this.parsed.set(shopId, { json, rules });
     return rules;
   }
@@ -63,7 +63,7 @@ export class ShopRulesService {
   private toDto(row: ShopRulesEntity | null): ShopRulesDto {
     return {
       // Parsed again on read: rules added to the schema later take their defaults in old rows.
-      rules: row ? shopRulesSchema.parse(row.rules) : defaultShopRules,
+      rules: row ? migrateShopRules(row.rules) : defaultShopRules,
       defaults: defaultShopRules,
       origins: shopRuleOrigins,
       version: row?.version ?? 0,

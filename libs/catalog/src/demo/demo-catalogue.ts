@@ -140,8 +140,8 @@ const hoses: PartOf<'hose'>[] = hoseLines.flatMap((line) =>
 // --- Hose ends: straight, 45° and 90° for each hose, -N 37° female swivel on the port side -----
 const endAngles = [
   { angle: 0 as const, word: 'straight', allowanceIn: 0.8, borePenaltyIn: 0, price: 0 },
-  { angle: 45 as const, word: '45°', allowanceIn: 1.25, borePenaltyIn: 0.02, price: 380 },
-  { angle: 90 as const, word: '90°', allowanceIn: 1.5, borePenaltyIn: 0.03, price: 460 },
+  { angle: 45 as const, word: '45°', allowanceIn: 1.25, borePenaltyIn: 0.01, price: 380 },
+  { angle: 90 as const, word: '90°', allowanceIn: 1.5, borePenaltyIn: 0.015, price: 460 },
 ];
 
 const braidedHoses = hoses.filter((hose) => hose.attributes.hoseType !== 'cooler-hose');
@@ -165,7 +165,10 @@ const braidedHoseEnds: PartOf<'hose-end'>[] = braidedHoses.flatMap((hose) =>
         port: end('flare37', `-${dash}`, 'female'),
         angle: a.angle,
         allowanceIn: a.allowanceIn + (ptfe ? 0.1 : 0) + (dash === 8 ? 0.1 : 0),
-        boreIn: (ptfe ? hose.attributes.idIn - 0.06 : hose.attributes.idIn - 0.07) - a.borePenaltyIn,
+        // The socket holds the hose about an inch past its cut face: nothing bends before that.
+        rigidLengthIn: Number((a.allowanceIn + (ptfe ? 0.1 : 0) + (dash === 8 ? 0.1 : 0) + (dash === 8 ? 1.0 : 0.85)).toFixed(2)),
+        // Bores stay at or above 80 % of the hose ID at every angle, so no suggested end restricts (common practice).
+        boreIn: Number(((ptfe ? hose.attributes.idIn - 0.045 : hose.attributes.idIn - 0.06) - a.borePenaltyIn).toFixed(3)),
         maxPressurePsi: hose.attributes.maxPressurePsi,
         endType: 'reusable' as const,
       },
@@ -191,7 +194,8 @@ const coolerHoseEnds: PartOf<'hose-end'>[] = endAngles.map((a, i) => ({
     port: end('flare37', '-6', 'female'),
     angle: a.angle,
     allowanceIn: a.allowanceIn + 0.2,
-    boreIn: 0.3 - a.borePenaltyIn,
+    rigidLengthIn: Number((a.allowanceIn + 0.2 + 0.75).toFixed(2)),
+    boreIn: Number((0.315 - a.borePenaltyIn).toFixed(3)),
     maxPressurePsi: 250,
     endType: 'push-on-clamp' as const,
   },
@@ -235,6 +239,8 @@ interface AdapterRow {
   angle?: 0 | 45 | 90;
   bodyLengthIn: number;
   boreIn: number;
+  /** How far side a reaches past the port face (invented, like every demo figure). */
+  reachIn?: number;
   features?: string[];
   seal?: SealNeed;
   sealCompound?: SealCompound;
@@ -242,11 +248,11 @@ interface AdapterRow {
 
 const adapterRows: AdapterRow[] = [
   // Transmission cooler circuit: 1/4 NPT and -6 ORB ports on the transmission.
-  { id: 'demo-adapter-npt4-f37-6', supplierId: RIDGEBACK, pn: 'RF-204-0604', description: '1/4 NPT male to -6 37° flare male', price: 495, a: end('npt', '1/4', 'male'), b: end('flare37', '-6', 'male'), bodyLengthIn: 1.1, boreIn: 0.28 },
-  { id: 'demo-adapter-npt4-f37-6-90', supplierId: RIDGEBACK, pn: 'RF-294-0604', description: '1/4 NPT male to -6 37° flare male, 90° elbow', price: 895, a: end('npt', '1/4', 'male'), b: end('flare37', '-6', 'male'), angle: 90, bodyLengthIn: 1.3, boreIn: 0.27 },
-  { id: 'demo-adapter-orb6-f37-6', supplierId: RIDGEBACK, pn: 'RF-206-0606', description: '-6 O-ring boss male to -6 37° flare male, short', price: 645, a: end('orb', '-6', 'male'), b: end('flare37', '-6', 'male'), bodyLengthIn: 0.95, boreIn: 0.31, seal: oring('906') },
-  { id: 'demo-adapter-orb6-f37-6-long', supplierId: RIDGEBACK, pn: 'RF-206-0606L', description: '-6 O-ring boss male to -6 37° flare male, long-nose (lubrication-feed return port)', price: 1275, a: end('orb', '-6', 'male'), b: end('flare37', '-6', 'male'), bodyLengthIn: 1.65, boreIn: 0.31, features: ['long-nose'], seal: oring('906') },
-  { id: 'demo-adapter-orb6-f37-6-90', supplierId: RIDGEBACK, pn: 'RF-296-0606', description: '-6 O-ring boss male to -6 37° flare male, 90° elbow', price: 1190, a: end('orb', '-6', 'male'), b: end('flare37', '-6', 'male'), angle: 90, bodyLengthIn: 1.4, boreIn: 0.3, seal: oring('906') },
+  { id: 'demo-adapter-npt4-f37-6', supplierId: RIDGEBACK, pn: 'RF-204-0604', description: '1/4 NPT male to -6 37° flare male', price: 495, a: end('npt', '1/4', 'male'), b: end('flare37', '-6', 'male'), bodyLengthIn: 1.1, boreIn: 0.3, reachIn: 0.55 },
+  { id: 'demo-adapter-npt4-f37-6-90', supplierId: RIDGEBACK, pn: 'RF-294-0604', description: '1/4 NPT male to -6 37° flare male, 90° elbow', price: 895, a: end('npt', '1/4', 'male'), b: end('flare37', '-6', 'male'), angle: 90, bodyLengthIn: 1.3, boreIn: 0.3, reachIn: 0.55 },
+  { id: 'demo-adapter-orb6-f37-6', supplierId: RIDGEBACK, pn: 'RF-206-0606', description: '-6 O-ring boss male to -6 37° flare male, short', price: 645, a: end('orb', '-6', 'male'), b: end('flare37', '-6', 'male'), bodyLengthIn: 0.95, boreIn: 0.31, reachIn: 0.5, seal: oring('906') },
+  { id: 'demo-adapter-orb6-f37-6-long', supplierId: RIDGEBACK, pn: 'RF-206-0606L', description: '-6 O-ring boss male to -6 37° flare male, long-nose (lubrication-feed return port)', price: 1275, a: end('orb', '-6', 'male'), b: end('flare37', '-6', 'male'), bodyLengthIn: 1.65, boreIn: 0.31, reachIn: 1.05, features: ['long-nose'], seal: oring('906') },
+  { id: 'demo-adapter-orb6-f37-6-90', supplierId: RIDGEBACK, pn: 'RF-296-0606', description: '-6 O-ring boss male to -6 37° flare male, 90° elbow', price: 1190, a: end('orb', '-6', 'male'), b: end('flare37', '-6', 'male'), angle: 90, bodyLengthIn: 1.4, boreIn: 0.3, reachIn: 0.5, seal: oring('906') },
   // Cooler: 5/8-18 inverted flare port (3/8 in tube, the same tube size as -6).
   { id: 'demo-adapter-invf6-f37-6', supplierId: RIDGEBACK, pn: 'RF-218-0606', description: '3/8 tube inverted flare male (5/8-18) to -6 37° flare male', price: 725, a: end('invflare45', '3/8', 'male'), b: end('flare37', '-6', 'male'), bodyLengthIn: 1.05, boreIn: 0.3 },
   // Engine-oil cooler circuit: M22x1.5 on the engine, -10 ORB on the cooler, -8 hose.
@@ -290,6 +296,7 @@ const adapters: PartOf<'adapter'>[] = adapterRows.map((r) => ({
     b: r.b,
     angle: r.angle ?? 0,
     bodyLengthIn: r.bodyLengthIn,
+    ...(r.reachIn === undefined ? {} : { reachIn: r.reachIn }),
     boreIn: r.boreIn,
     features: r.features ?? [],
     ...(r.seal ? { seal: r.seal } : {}),

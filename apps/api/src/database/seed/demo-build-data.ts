@@ -66,6 +66,9 @@ export const DEMO_CIRCUITS: DemoCircuit[] = [
             dx: 48,
             dy: 24,
             feedsLubrication: true,
+            // The lubrication passage starts 0.9 in behind the face: the long nose must reach it (invented figures).
+            minReachIn: 0.9,
+            threadDepthIn: 1.2,
             requirement: {
               feature: 'long-nose',
               reason:
@@ -82,7 +85,7 @@ export const DEMO_CIRCUITS: DemoCircuit[] = [
         y: 160,
         mountGroup: 'chassis',
         ports: [
-          { id: 'in', label: 'Inlet', connection: spec('invflare45', '3/8', 'female'), role: 'feed', dx: -60, dy: -20 },
+          { id: 'in', label: 'Inlet', connection: spec('invflare45', '3/8', 'female'), role: 'in', dx: -60, dy: -20 },
           { id: 'out', label: 'Outlet', connection: spec('invflare45', '3/8', 'female'), role: 'out', dx: -60, dy: 20 },
         ],
       },
@@ -112,7 +115,7 @@ export const DEMO_CIRCUITS: DemoCircuit[] = [
         y: 240,
         mountGroup: 'chassis',
         ports: [
-          { id: 'in', label: 'Inlet', connection: spec('orb', '-10', 'female'), role: 'feed', dx: -50, dy: -18 },
+          { id: 'in', label: 'Inlet', connection: spec('orb', '-10', 'female'), role: 'in', dx: -50, dy: -18 },
           { id: 'out', label: 'Outlet', connection: spec('orb', '-10', 'female'), role: 'out', dx: -50, dy: 18 },
         ],
       },
@@ -142,7 +145,7 @@ export const DEMO_CIRCUITS: DemoCircuit[] = [
         y: 500,
         mountGroup: 'chassis',
         ports: [
-          { id: 'in', label: 'Inlet', connection: spec('orb', '-8', 'female'), role: 'feed', dx: -30, dy: 0 },
+          { id: 'in', label: 'Inlet', connection: spec('orb', '-8', 'female'), role: 'in', dx: -30, dy: 0 },
           { id: 'out', label: 'Outlet', connection: spec('orb', '-8', 'female'), role: 'out', dx: 30, dy: 0 },
         ],
       },
@@ -154,7 +157,7 @@ export const DEMO_CIRCUITS: DemoCircuit[] = [
         y: 300,
         mountGroup: 'powertrain',
         ports: [
-          { id: 'in', label: 'Inlet', connection: spec('orb', '-8', 'female'), role: 'feed', dx: -70, dy: 0 },
+          { id: 'in', label: 'Inlet', connection: spec('orb', '-8', 'female'), role: 'in', dx: -70, dy: 0 },
           { id: 'out', label: 'Outlet', connection: spec('orb', '-6', 'female'), role: 'out', dx: 70, dy: 0 },
         ],
       },
@@ -166,8 +169,8 @@ export const DEMO_CIRCUITS: DemoCircuit[] = [
         y: 260,
         mountGroup: 'chassis',
         ports: [
-          { id: 'in', label: 'From rail', connection: spec('orb', '-6', 'female'), role: 'feed', dx: -24, dy: 0 },
-          { id: 'return', label: 'Return to tank', connection: spec('orb', '-6', 'female'), role: 'return', dx: 24, dy: 0 },
+          { id: 'in', label: 'From rail', connection: spec('orb', '-6', 'female'), role: 'in', dx: -24, dy: 0 },
+          { id: 'return', label: 'Return to tank', connection: spec('orb', '-6', 'female'), role: 'out', dx: 24, dy: 0 },
         ],
       },
     ]),
