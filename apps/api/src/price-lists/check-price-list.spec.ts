@@ -11,6 +11,10 @@ describe('price-list rows', () => {
     expect(parsePriceCents('0.1')).toBe(10);
     // 0.1 + 0.2 is 0.30000000000000004 in IEEE 754 doubles: still 30 cents.
     expect(parsePriceCents(0.1 + 0.2)).toBe(30);
+    // Decimal commas of lists from other locales; "1,234" stays one thousand two hundred thirty-four.
+    expect(parsePriceCents('12,50')).toBe(1250);
+    expect(parsePriceCents('1.234,5')).toBe(123450);
+    expect(parsePriceCents('1,234')).toBe(123400);
     for (const bad of [-1, '12.345', 'twelve', '', null, Number.NaN, '1,23.00']) expect(parsePriceCents(bad as never)).toBeUndefined();
   });
 

@@ -33,7 +33,11 @@ type ExistingPart = Part & { version: number };
 
 const MAX_PRICE_CENTS = 100_000_000; // $1,000,000.00: far above any line part, far below the column's limit.
 
-/** "12.5", "$1,234.50", 12.5 → cents; undefined when it is not a plain non-negative amount with at most 2 decimals. */
+/**
+ * "12.5", "$1,234.50", 12.5 → cents; so are the decimal-comma forms of lists from other locales,
+ * "12,50" and "1.234,50" (a comma followed by one or two digits cannot be a thousands separator).
+ * Undefined when it is not a plain non-negative amount with at most 2 decimals.
+ */
 export function parsePriceCents(value: CellValue): number | undefined {
   if (typeof value === 'number') {
     if (!Number.isFinite(value) || value < 0) return undefined;
@@ -41,7 +45,9 @@ export function parsePriceCents(value: CellValue): number | undefined {
     return Math.abs(cents - value * 100) < 1e-6 ? cents : undefined;
   }
   if (typeof value !== 'string') return undefined;
-  const text = value.replace(/^\$\s*/, '').replace(/,(?=\d{3}(\D|$))/g, '');
+  const amount = value.replace(/^\$\s*/, '');
+  const decimalComma = /^\d{1,3}(\.\d{3})*,\d{1,2}$|^\d+,\d{1,2}$/.test(amount);
+  const text = decimalComma ? amount.replace(/\./g, '').replace(',', '.') : amount.replace(/,(?=\d{3}(\D|$))/g, '');
   if (!/^\d+(\.\d{1,2})?$/.test(text)) return undefined;
   return Math.round(Number(text) * 100);
 }
@@ -66,7 +72,7 @@ export function parseSaleUnit(unit: CellValue, packSize: CellValue): SaleUnit | 
  * part numbers are errors. Writes nothing.
  */
 export function checkPriceList(
-  sheet: PriceListSheet,
+  sheet: Pick<PriceListSheet, 'rows'>,
   columns: Partial<Record<MappingField, number>>,
   headers: readonly string[],
   supplierParts: readonly ExistingPart[],

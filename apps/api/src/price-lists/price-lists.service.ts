@@ -9,9 +9,11 @@ import { checkPriceList, type ImportCounts, type PriceChange } from './check-pri
 import { guessMapping, resolveMapping } from './column-mapping.js';
 import type { ColumnMapping, MappingField, PriceListForm } from './dto/price-list.schemas.js';
 import { PriceListRowsError, type ImportIssue } from './price-list-errors.js';
-import { readPriceList, type PriceListSheet, type UploadedFile } from './read-price-list.js';
+import { readPriceList, type PriceListReading, type PriceListSheet, type UploadedFile } from './read-price-list.js';
 
 export interface PriceListPreview {
+  /** How the file was read ("Read as Windows-1252, separated by semicolons."), and for a CSV the choices. */
+  readAs: PriceListReading;
   headers: string[];
   mapping: Partial<Record<MappingField, string | null>>;
   /** True when the mapping was guessed from the header row (none was sent). */
@@ -33,14 +35,14 @@ export class PriceListsService {
   ) {}
 
   async preview(shopId: string, file: UploadedFile | undefined, form: PriceListForm): Promise<PriceListPreview> {
-    const sheet = await this.open(shopId, file, form.supplierId);
+    const sheet = await this.open(shopId, file, form);
     const guessed = !form.mapping;
     const mapping: Partial<Record<MappingField, string | null>> = form.mapping ?? guessMapping(sheet.headers);
     if (!mapping.partNumber || !mapping.price) {
-      return { headers: sheet.headers, mapping, guessed, rows: [], report: [], counts: NO_COUNTS };
+      return { readAs: sheet.readAs, headers: sheet.headers, mapping, guessed, rows: [], report: [], counts: NO_COUNTS };
     }
     const check = await this.check(shopId, sheet, mapping as ColumnMapping, form.supplierId);
-    return { headers: sheet.headers, mapping, guessed, rows: check.changes, report: check.report, counts: check.counts };
+    return { readAs: sheet.readAs, headers: sheet.headers, mapping, guessed, rows: check.changes, report: check.report, counts: check.counts };
   }
 
   /**
@@ -49,7 +51,7 @@ export class PriceListsService {
    */
   async commit(shopId: string, file: UploadedFile | undefined, form: PriceListForm): Promise<{ counts: ImportCounts }> {
     if (!form.mapping) throw new ValidationError([{ path: 'mapping', message: 'Choose which column holds each field before importing.' }]);
-    const sheet = await this.open(shopId, file, form.supplierId);
+    const sheet = await this.open(shopId, file, form);
     const check = await this.check(shopId, sheet, form.mapping, form.supplierId);
     if (check.report.length) throw new PriceListRowsError(check.report, check.counts);
     try {
@@ -82,12 +84,12 @@ export class PriceListsService {
     if (!affected) throw fail(`Part ${change.supplierPartNumber} was changed by someone else meanwhile; preview again. Nothing was imported.`);
   }
 
-  private async open(shopId: string, file: UploadedFile | undefined, supplierId: string): Promise<PriceListSheet> {
+  private async open(shopId: string, file: UploadedFile | undefined, form: PriceListForm): Promise<PriceListSheet> {
     if (!file) throw new ValidationError([{ path: 'file', message: 'Choose a price list file (.xlsx or .csv).' }]);
-    if (!(await this.suppliers.existsInShop(shopId, supplierId))) {
+    if (!(await this.suppliers.existsInShop(shopId, form.supplierId))) {
       throw new ValidationError([{ path: 'supplierId', message: 'Choose one of your suppliers.' }]);
     }
-    return readPriceList(file);
+    return readPriceList(file, { encoding: form.encoding, delimiter: form.delimiter });
   }
 
   private async check(shopId: string, sheet: PriceListSheet, mapping: ColumnMapping, supplierId: string) {

@@ -1,15 +1,29 @@
-import ExcelJS from 'exceljs';
-import { Readable } from 'node:stream';
+import { CSV_DELIMITERS, CSV_DELIMITER_NAMES, CSV_ENCODINGS, CSV_ENCODING_NAMES, encodingName, type CsvDelimiter, type CsvEncoding } from './csv-formats.js';
 import { PriceListFileError } from './price-list-errors.js';
-import { PRICE_LIST_MAX_ROWS, PRICE_LIST_ZIP_LIMITS } from './price-list-limits.js';
-import { inspectZip } from './zip-inspection.js';
+import { PRICE_LIST_MAX_ROWS } from './price-list-limits.js';
+import { readCsvRows, type CsvChoice } from './read-csv.js';
+import { readXlsxRows, type CellValue } from './read-xlsx.js';
 
-export type CellValue = string | number | null;
+export type { CellValue } from './read-xlsx.js';
+
+/** How the file was read, in plain words for the preview, and what may be chosen instead. */
+export type PriceListReading =
+  | { format: 'xlsx'; sheetName: string; summary: string }
+  | {
+      format: 'csv';
+      encoding: CsvEncoding;
+      encodingDetected: boolean;
+      delimiter: CsvDelimiter;
+      delimiterDetected: boolean;
+      summary: string;
+      choices: { encodings: Array<{ value: CsvEncoding; label: string }>; delimiters: Array<{ value: CsvDelimiter; label: string }> };
+    };
 
 export interface PriceListSheet {
   headers: string[];
   /** Data rows below the header row; `row` is the 1-based row number in the file. */
   rows: Array<{ row: number; cells: CellValue[] }>;
+  readAs: PriceListReading;
 }
 
 export interface UploadedFile {
@@ -25,61 +39,47 @@ function kindOf(file: UploadedFile): 'csv' | 'xlsx' {
   throw new PriceListFileError('Send the price list as an .xlsx workbook or a .csv file.');
 }
 
-/** Plain text or number of a cell; formulas are refused (a price list carries values only). */
-function plainValue(cell: ExcelJS.Cell): CellValue {
-  const value = cell.value;
-  if (value === null || value === undefined) return null;
-  if (typeof value === 'number' || typeof value === 'string') return value;
-  if (typeof value === 'boolean') return String(value);
-  if (value instanceof Date) return value.toISOString().slice(0, 10);
-  if ('formula' in value || 'sharedFormula' in value) {
-    throw new PriceListFileError(`Cell ${cell.address} holds a formula. Save the price list with values only and send it again.`);
-  }
-  if ('richText' in value) return value.richText.map((run) => run.text).join('');
-  if ('text' in value && typeof value.text === 'string') return value.text;
-  if ('error' in value) return String(value.error);
-  return null;
-}
+const CSV_CHOICES = {
+  encodings: CSV_ENCODING_NAMES.map((value) => ({ value, label: CSV_ENCODINGS[value] })),
+  delimiters: CSV_DELIMITER_NAMES.map((value) => ({ value, label: CSV_DELIMITERS[value].label })),
+};
 
-async function loadWorkbook(file: UploadedFile, kind: 'csv' | 'xlsx'): Promise<ExcelJS.Worksheet> {
-  const workbook = new ExcelJS.Workbook();
-  if (kind === 'csv') {
-    // Keep every field as text (the default map turns "0123" into 123 and some numbers into dates).
-    return workbook.csv.read(Readable.from([file.buffer]), { map: (datum: string) => (datum === '' ? null : datum) } as never);
-  }
-  const verdict = inspectZip(file.buffer, PRICE_LIST_ZIP_LIMITS);
-  if (!verdict.ok) throw new PriceListFileError(verdict.reason);
-  try {
-    await workbook.xlsx.load(file.buffer as never);
-  } catch {
-    throw new PriceListFileError('The workbook cannot be read; it may be damaged. Save it again as .xlsx and retry.');
-  }
-  const sheet = workbook.worksheets[0];
-  if (!sheet) throw new PriceListFileError('The workbook has no sheet.');
-  return sheet;
-}
-
-/** Reads the first sheet: the first non-empty row is the header row, every later non-empty row is data. */
-export async function readPriceList(file: UploadedFile): Promise<PriceListSheet> {
-  const sheet = await loadWorkbook(file, kindOf(file));
-  if (sheet.actualRowCount > PRICE_LIST_MAX_ROWS + 1) {
-    throw new PriceListFileError(
-      `The price list has ${(sheet.actualRowCount - 1).toLocaleString('en-US')} rows; at most ${PRICE_LIST_MAX_ROWS.toLocaleString('en-US')} are taken at a time. Split it into smaller files.`,
-    );
-  }
+/**
+ * Reads the first sheet (or the CSV): the first row holding a value is the header row, every later
+ * such row is data. Reading stops at the row after the limit, so the rest of a huge file is never
+ * parsed.
+ */
+export async function readPriceList(file: UploadedFile, choice: CsvChoice = {}): Promise<PriceListSheet> {
   let headers: string[] | undefined;
   const rows: PriceListSheet['rows'] = [];
-  sheet.eachRow({ includeEmpty: false }, (row, number) => {
-    const width = Math.max(row.cellCount, headers?.length ?? 0);
-    const cells: CellValue[] = [];
-    for (let column = 1; column <= width; column += 1) {
-      const value = plainValue(row.getCell(column));
-      cells.push(typeof value === 'string' ? value.trim() || null : value);
-    }
+  const visit = (row: number, raw: readonly CellValue[]) => {
+    const cells = raw.map((cell) => (typeof cell === 'string' ? cell.trim() || null : cell));
     if (cells.every((cell) => cell === null)) return;
-    if (!headers) headers = cells.map((cell, index) => (cell === null ? `Column ${index + 1}` : String(cell)));
-    else rows.push({ row: number, cells });
-  });
+    if (!headers) {
+      headers = cells.map((cell, index) => (cell === null ? `Column ${index + 1}` : String(cell)));
+      return;
+    }
+    if (rows.length === PRICE_LIST_MAX_ROWS) {
+      throw new PriceListFileError(
+        `The price list has more than ${PRICE_LIST_MAX_ROWS.toLocaleString('en-US')} rows; at most ${PRICE_LIST_MAX_ROWS.toLocaleString('en-US')} are taken at a time. Split it into smaller files.`,
+      );
+    }
+    rows.push({ row, cells });
+  };
+  let readAs: PriceListReading;
+  if (kindOf(file) === 'csv') {
+    const reading = readCsvRows(file.buffer, choice, visit);
+    const chosen = (detected: boolean) => (detected ? '' : ' (as chosen)');
+    readAs = {
+      format: 'csv',
+      ...reading,
+      summary: `Read as ${encodingName(reading.encoding)}${chosen(reading.encodingDetected)}, separated by ${CSV_DELIMITERS[reading.delimiter].words}${chosen(reading.delimiterDetected)}.`,
+      choices: CSV_CHOICES,
+    };
+  } else {
+    const { sheetName } = await readXlsxRows(file.buffer, visit);
+    readAs = { format: 'xlsx', sheetName, summary: `Read the first sheet, “${sheetName}”.` };
+  }
   if (!headers) throw new PriceListFileError('The price list is empty.');
-  return { headers, rows };
+  return { headers, rows, readAs };
 }

@@ -11,10 +11,28 @@ async function realWorkbook(): Promise<Buffer> {
 }
 
 describe('inspectZip (PKWARE APPNOTE 4.3.12 central directory, 4.3.16 end record)', () => {
-  it('accepts a workbook written by exceljs and counts its parts', async () => {
-    const verdict = inspectZip(await realWorkbook(), limits);
-    expect(verdict).toMatchObject({ ok: true });
-    expect(verdict.ok && verdict.entries).toBeGreaterThan(3);
+  it('accepts a workbook written by exceljs and lists its parts with where their data starts', async () => {
+    const data = await realWorkbook();
+    const verdict = inspectZip(data, limits);
+    if (!verdict.ok) throw new Error(verdict.reason);
+    const sheet = verdict.entries.find((entry) => entry.name === 'xl/worksheets/sheet1.xml');
+    expect(sheet).toMatchObject({ method: 8 });
+    // The local header (APPNOTE 4.3.7) sits 30 bytes plus name and extra field before the data.
+    expect(data.toString('latin1', sheet!.dataOffset - 'xl/worksheets/sheet1.xml'.length, sheet!.dataOffset)).toBe('xl/worksheets/sheet1.xml');
+    expect(verdict.entries.map((entry) => entry.name)).toEqual(expect.arrayContaining(['xl/workbook.xml', 'xl/_rels/workbook.xml.rels', 'xl/sharedStrings.xml']));
+  });
+
+  it('refuses an encrypted entry and a local header that is not where the directory says', async () => {
+    const data = Buffer.from(await realWorkbook());
+    const verdict = inspectZip(data, limits);
+    if (!verdict.ok) throw new Error(verdict.reason);
+    const directory = data.indexOf(Buffer.from([0x50, 0x4b, 0x01, 0x02]));
+    const encrypted = Buffer.from(data);
+    encrypted.writeUInt16LE(encrypted.readUInt16LE(directory + 8) | 1, directory + 8);
+    expect(inspectZip(encrypted, limits)).toMatchObject({ ok: false, reason: expect.stringMatching(/password/) });
+    const moved = Buffer.from(data);
+    moved.writeUInt32LE(7, directory + 42);
+    expect(inspectZip(moved, limits)).toMatchObject({ ok: false, reason: expect.stringMatching(/damaged/) });
   });
 
   it('refuses what is not a zip, a zip cut short, and an entry that inflates too far', async () => {

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { zodDto } from '../../common/validation/zod-dto.js';
+import { CSV_DELIMITER_NAMES, CSV_ENCODING_NAMES } from '../csv-formats.js';
 
 export const MAPPING_FIELDS = ['partNumber', 'description', 'price', 'saleUnit', 'packSize'] as const;
 export type MappingField = (typeof MAPPING_FIELDS)[number];
@@ -16,7 +17,13 @@ export const columnMappingSchema = z.object({
 });
 export type ColumnMapping = z.output<typeof columnMappingSchema>;
 
-/** The text fields of the multipart form; `mapping` is JSON and may be left out for a first look. */
+/** A form field that may be sent empty: empty means "not chosen". */
+const optionalChoice = <T extends z.ZodType>(schema: T) => z.preprocess((value) => (value === '' ? undefined : value), schema.optional());
+
+/**
+ * The text fields of the multipart form; `mapping` is JSON and may be left out for a first look.
+ * `encoding` and `delimiter` override what is detected in a CSV (ignored for .xlsx).
+ */
 export const priceListFormSchema = z.object({
   supplierId: z.uuid('Choose one of your suppliers.'),
   mapping: z
@@ -32,6 +39,8 @@ export const priceListFormSchema = z.object({
       }
     })
     .pipe(columnMappingSchema.optional()),
+  encoding: optionalChoice(z.enum(CSV_ENCODING_NAMES, 'Choose one of the offered text encodings.')),
+  delimiter: optionalChoice(z.enum(CSV_DELIMITER_NAMES, 'Choose comma, semicolon or tab.')),
 });
 export class PriceListFormDto extends zodDto(priceListFormSchema) {}
 export type PriceListForm = z.output<typeof priceListFormSchema>;
