@@ -131,5 +131,20 @@ describe('shop rules and rules evaluation (e2e)', () => {
         expect.arrayContaining(['schema', 'circuit.fluid']),
       );
     });
+
+    it('refuses a circuit over the work budget with 400 circuit_too_complex naming the count and the limit', async () => {
+      // 200 corners on each line among 200 heat zones of 200 points: within every schema limit.
+      const doc = coolerLine();
+      const corners = Array.from({ length: 200 }, (_, k) => ({ x: (k * 37) % 2000, y: (k * 53) % 800, bendRadiusIn: 3 }));
+      doc.lines = doc.lines.map((line) => ({ ...line, points: corners }));
+      doc.heatZones = Array.from({ length: 200 }, (_, z) => ({
+        id: `z${z}`,
+        kind: 'exhaust' as const,
+        polygon: Array.from({ length: 200 }, (_, k) => ({ x: ((z * 97) % 2000) + 60 * Math.cos((2 * Math.PI * k) / 200), y: ((z * 41) % 800) + 60 * Math.sin((2 * Math.PI * k) / 200) })),
+      }));
+      const refused = await evaluate(doc).expect(400);
+      expect(refused.body.code).toBe('circuit_too_complex');
+      expect(refused.body.message).toMatch(/^This circuit is too complex to check: [\d,]+( or more)? corner-zone pairs, the limit is [\d,]+\./);
+    });
   });
 });

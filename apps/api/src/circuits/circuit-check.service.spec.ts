@@ -6,6 +6,7 @@ import { RulesService } from '../rules/rules.service.js';
 import { ShopRulesEntity } from '../shop-rules/shop-rules.entity.js';
 import { ShopRulesService } from '../shop-rules/shop-rules.service.js';
 import { CircuitCheckService } from './circuit-check.service.js';
+import { Engine, InlineEngine } from '../rules/engine/engine-pool.service.js';
 
 const SHOP = '11111111-1111-4111-8111-111111111111';
 const CIRCUIT = '22222222-2222-4222-8222-222222222222';
@@ -53,6 +54,7 @@ describe('CircuitCheckService', () => {
         { provide: getRepositoryToken(ShopRulesEntity), useValue: {} },
         { provide: ShopCatalogueService, useValue: catalogue },
         { provide: getDataSourceToken(), useValue: dataSource },
+        { provide: Engine, useClass: InlineEngine },
       ],
     }).compile();
     service = moduleRef.get(CircuitCheckService);

@@ -6,6 +6,7 @@ import { ShopCatalogueService } from '../parts/shop-catalogue.service.js';
 import { ShopRulesEntity } from '../shop-rules/shop-rules.entity.js';
 import { ShopRulesService } from '../shop-rules/shop-rules.service.js';
 import { partIdsOf, RulesService } from './rules.service.js';
+import { Engine, InlineEngine } from './engine/engine-pool.service.js';
 
 const SHOP = '11111111-1111-4111-8111-111111111111';
 
@@ -53,6 +54,7 @@ describe('RulesService', () => {
         { provide: getRepositoryToken(ShopRulesEntity), useValue: {} },
         { provide: ShopCatalogueService, useValue: catalogue },
         { provide: getDataSourceToken(), useValue: dataSource },
+        { provide: Engine, useClass: InlineEngine },
       ],
     }).compile();
     service = moduleRef.get(RulesService);

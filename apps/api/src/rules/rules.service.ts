@@ -1,11 +1,12 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { Part } from '@linesmith/catalog';
-import { evaluateCircuit, type CircuitDocument, type CircuitEvaluation } from '@linesmith/routing';
+import type { CircuitDocument, CircuitEvaluation } from '@linesmith/routing';
 import type { DataSource } from 'typeorm';
 import { NotFoundError } from '../common/errors/app-error.js';
 import { catalogueFingerprintSql, ShopCatalogueService } from '../parts/shop-catalogue.service.js';
 import { ShopRulesService } from '../shop-rules/shop-rules.service.js';
+import { Engine } from './engine/engine-pool.service.js';
 
 /** Kinds the engine picks from the whole catalogue by itself: clamps by hose OD, sleeves and seals for the bill of materials. */
 const PICKED_BY_THE_ENGINE = new Set<Part['kind']>(['clamp', 'sleeve', 'seal']);
@@ -49,6 +50,7 @@ export class RulesService {
     private readonly catalogue: ShopCatalogueService,
     private readonly shopRules: ShopRulesService,
     @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly engine: Engine,
   ) {}
 
   /**
@@ -67,6 +69,9 @@ export class RulesService {
     const rules = this.shopRules.rulesFromStored(shopId, inputs.rulesJson);
     const named = partIdsOf(doc);
     const parts = catalogue.filter((part) => named.has(part.id) || PICKED_BY_THE_ENGINE.has(part.kind));
-    return evaluateCircuit(doc, parts, rules, { taxRatePercent: Number(inputs.taxRatePercent) });
+    // Checked in the engine's worker pool, within its work budget (400 circuit_too_complex above it).
+    // Each worker keeps an incremental evaluator per shop, catalogue, rules and set of parts named.
+    const evaluatorKey = [shopId, inputs.catalogueFingerprint, inputs.taxRatePercent, inputs.rulesJson ?? '', [...named].sort().join(',')].join('\u0000');
+    return this.engine.evaluate({ evaluatorKey, doc, parts, rules, taxRatePercent: Number(inputs.taxRatePercent) });
   }
 }

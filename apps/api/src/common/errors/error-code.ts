@@ -8,6 +8,7 @@ export const ErrorCode = {
   Conflict: 'conflict',
   InvalidTransition: 'invalid_transition',
   ReviewBlocked: 'review_blocked',
+  CircuitTooComplex: 'circuit_too_complex',
   PayloadTooLarge: 'payload_too_large',
   PreconditionRequired: 'precondition_required',
   RateLimited: 'rate_limited',
@@ -21,6 +22,7 @@ export type ErrorCode = (typeof ErrorCode)[keyof typeof ErrorCode];
 export const HTTP_STATUS_OF: Record<ErrorCode, number> = {
   validation_failed: 400,
   bad_request: 400,
+  circuit_too_complex: 400,
   invalid_credentials: 401,
   unauthorized: 401,
   forbidden: 403,
