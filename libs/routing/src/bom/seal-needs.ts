@@ -1,4 +1,4 @@
-import type { Fluid, Part, PartOf, SealNeed } from '@linesmith/catalog';
+import type { Fluid, Part, PartOf, SealCompound, SealNeed } from '@linesmith/catalog';
 import { compoundProblem, hasSeatForms, sealCompoundLabels, sealsForPort, suitableCompounds } from '@linesmith/catalog';
 import type { ResolvedStack } from '../lines/end-stack.js';
 import type { PortEntry } from '../lines/port-entry.js';
@@ -98,17 +98,35 @@ export class SealCatalogue extends Map<string, PartOf<'seal'>> {
 }
 
 /**
+ * Where a suitable seal's compound comes in the usual choice for the service (`suitableCompounds`
+ * order; after them, compounds not listed): picks between seal parts that suit equally, so the
+ * choice never depends on the order the catalogue lists its parts in.
+ */
+function compoundPreference(part: PartOf<'seal'>, preferred: readonly SealCompound[]): number {
+  const { compound } = part.attributes;
+  const index = compound === undefined ? -1 : preferred.indexOf(compound);
+  return index === -1 ? preferred.length : index;
+}
+
+/**
  * The shop's seal parts by seal size, the one that best suits the fluid and temperature of each
- * (catalogue order among equals), for the seals the ports and adapters need.
+ * (among equals, the usual compound for the fluid first; then catalogue order), for the seals the
+ * ports and adapters need.
  */
 export function suitedSealCatalogue(parts: ReadonlyMap<string, Part> | Iterable<Part>, service: SealService | undefined): SealCatalogue {
   const chosen = new SealCatalogue(compoundToBuy(service));
+  const preferred = service ? suitableCompounds(service.fluid, service.maxTempF) : [];
   const all = parts instanceof Map ? parts.values() : (parts as Iterable<Part>);
   for (const part of all) {
     if (part.kind !== 'seal' || part.retired) continue;
     const key = sealKey(part.attributes.seal);
     const current = chosen.get(key);
-    if (!current || sealSuitability(part, service) < sealSuitability(current, service)) chosen.set(key, part);
+    if (!current) {
+      chosen.set(key, part);
+      continue;
+    }
+    const suits = sealSuitability(part, service) - sealSuitability(current, service);
+    if (suits < 0 || (suits === 0 && compoundPreference(part, preferred) < compoundPreference(current, preferred))) chosen.set(key, part);
   }
   return chosen;
 }

@@ -51,6 +51,14 @@ describe('fluid rule: seals by compound', () => {
     expect(result.bom.rows.find((r) => r.kind === 'seal')?.partId).toBe('oring-906');
   });
 
+  it('picks between equally suitable seals by the usual compound for the fluid, whatever the catalogue order', () => {
+    // Both suit ATF at 250 °F; nitrile is the usual choice for ATF, listed first or last.
+    const reversed = evaluateCircuit(coolerCircuit(), [fkm906, ...testParts], defaultShopRules);
+    expect(reversed.bom.rows.find((r) => r.kind === 'seal')?.partId).toBe('oring-906');
+    // On E85 only the fluorocarbon one suits, wherever it is listed.
+    expect(e85([fkm906, ...testParts, ptfeHose]).bom.rows.find((r) => r.kind === 'seal')?.partId).toBe('oring-906-fkm');
+  });
+
   it('a seal the catalogue lacks is listed with the compound to buy for the fluid', () => {
     const result = e85(
       [...testParts.filter((p) => p.id !== 'oring-906'), ptfeHose],
