@@ -96,8 +96,14 @@ describe('parts and suppliers (e2e)', () => {
     const search = await listAs(fabToken, `search=${encodeURIComponent('LONG-NOSE')}`);
     expect(idsOf(search.items)).toEqual([id('demo-adapter-orb6-f37-6-long')]);
 
-    const hoseOfHarbor = await listAs(fabToken, `kind=hose&supplierId=${(await listAs(fabToken, 'kind=hose')).items[0].supplierId}`);
-    expect(hoseOfHarbor.total).toBe(4);
+    // The hoses of the first hose's supplier: as many as the demo catalogue has from that supplier.
+    const supplierId = (await listAs(fabToken, 'kind=hose')).items[0].supplierId;
+    const suppliers = (await testApp.http().get('/api/suppliers').set(as(fabToken)).expect(200)).body as Array<{ id: string; name: string }>;
+    const demoSupplier = demoSuppliers.find((s) => s.name === suppliers.find((s) => s.id === supplierId)?.name);
+    const demoHosesOfSupplier = demoParts.filter((p) => p.kind === 'hose' && p.supplierId === demoSupplier?.id).length;
+    expect(demoHosesOfSupplier).toBeGreaterThan(0);
+    const hosesOfSupplier = await listAs(fabToken, `kind=hose&supplierId=${supplierId}`);
+    expect(hosesOfSupplier.total).toBe(demoHosesOfSupplier);
 
     const byPrice = await listAs(fabToken, 'kind=adapter&sort=priceCents&direction=desc&pageSize=200');
     const prices = byPrice.items.map((part) => part.priceCents);
@@ -105,11 +111,12 @@ describe('parts and suppliers (e2e)', () => {
   });
 
   it('finds the hose ends, clamps and sleeves that fit a hose', async () => {
-    // -6 CPE braided rubber hose, OD 0.69 in: its own three hose ends, the 0.63–0.72 in clamp and
-    // the 0.50–0.75 in sleeve; not the PTFE ends, not the -8 ends, not the 0.53–0.62 in clamp.
+    // -6 CPE braided rubber hose, OD 0.69 in: its own three hose ends and its M14 banjo hose end,
+    // the 0.63–0.72 in clamp and the 0.50–0.75 in sleeve; not the PTFE ends, not the -8 ends, not
+    // the barbed ends of the -6 cooler hose (same OD), not the 0.53–0.62 in clamp.
     const fits = await listAs(fabToken, `fitsHose=${id('demo-hose-6-rubber')}&pageSize=200`);
     expect(idsOf(fits.items)).toEqual(
-      ['demo-hose-end-6-rubber-0', 'demo-hose-end-6-rubber-45', 'demo-hose-end-6-rubber-90', 'demo-clamp-11-16', 'demo-sleeve-5-8']
+      ['demo-hose-end-6-rubber-0', 'demo-hose-end-6-rubber-45', 'demo-hose-end-6-rubber-90', 'demo-hose-end-6-rubber-banjo-m14', 'demo-clamp-11-16', 'demo-sleeve-5-8']
         .map(id)
         .sort(),
     );

@@ -1,3 +1,4 @@
+import { families as connectionFamilies, familyLabel, type Family } from '@linesmith/catalog';
 import { seedCatalogueInto } from './support/demo-catalogue.js';
 import { createTestShop, removeShops, signIn, type TestShop } from './support/fixtures.js';
 import { startTestApp, type TestApp } from './support/test-app.js';
@@ -33,9 +34,13 @@ describe('reference (e2e)', () => {
 
   it('lists the families with labels and the thread tables with their sources', async () => {
     const families = await testApp.http().get('/api/reference/families').set(as(token)).expect(200);
-    expect(families.body.map((f: { family: string }) => f.family).sort()).toEqual(
-      ['barb', 'flare37', 'flare45', 'invflare45', 'metric', 'npt', 'orb'].sort(),
+    // Every connection family of the catalogue library, each with its label: the original seven and
+    // the BSP, NPTF, NPSM, ORFS, banjo and quick-connect families.
+    expect(families.body.map((f: { family: string }) => f.family).sort()).toEqual([...connectionFamilies].sort());
+    expect(connectionFamilies).toEqual(
+      expect.arrayContaining(['barb', 'flare37', 'flare45', 'invflare45', 'metric', 'npt', 'orb', 'bspp', 'bspt', 'nptf', 'npsm', 'orfs', 'banjo', 'qc']),
     );
+    for (const entry of families.body as Array<{ family: Family; label: string }>) expect(entry.label).toBe(familyLabel(entry.family));
 
     const flare37 = await testApp.http().get('/api/reference/threads?family=flare37').set(as(token)).expect(200);
     expect(flare37.body).toHaveLength(1);
@@ -54,7 +59,8 @@ describe('reference (e2e)', () => {
     expect(quarter.l2).toBeCloseTo(0.4018, 4);
 
     const all = await testApp.http().get('/api/reference/threads').set(as(token)).expect(200);
-    expect(all.body).toHaveLength(7);
+    // One table per family.
+    expect(all.body.map((table: { family: string }) => table.family).sort()).toEqual([...connectionFamilies].sort());
     const unknown = await testApp.http().get('/api/reference/threads?family=bsp').set(as(token)).expect(400);
     expect(unknown.body.issues[0].path).toBe('family');
   });

@@ -54,7 +54,9 @@ describe('reviews: submit, acknowledge, approve or return, audit trail, comparis
    * A -6 cooler line, 30 in straight at 10 px/in, from a -6 O-ring boss port (powertrain) to a
    * 3/8 in inverted-flare port (chassis) — the document of rules.e2e-spec, whose hand-worked cut
    * length is 28 in. Two cautions: without supports its one 30 in span is a `support-gap`, and the
-   * inverted-flare adapter's 0.3 in bore is under 80 % of the hose's 0.375 in bore (`restriction`).
+   * cooler's port is drawn with the role `feed`, which sends fluid out as the transmission's `out`
+   * does (`flow-direction`). The inverted-flare adapter's 0.3 in bore is exactly 80 % of the hose's
+   * 0.375 in bore, which meets the restriction ratio, so it raises no `restriction`.
    */
   const coolerLine = (edit?: (doc: CircuitDocumentInput) => void): CircuitDocumentInput => {
     const doc = coolerLineDocument(id);
@@ -129,11 +131,10 @@ describe('reviews: submit, acknowledge, approve or return, audit trail, comparis
     expect(opened.body.openItems.blockers).toEqual([]);
     const openKeys: string[] = opened.body.openItems.unacknowledgedCautions.map((flag: { key: string }) => flag.key);
     expect(openKeys).toHaveLength(2);
-    // A restriction points at the part's place in its end stack; the support gap at the line.
-    expect(openKeys).toContain('support-gap@line:L1');
-    expect(openKeys.find((key) => key.startsWith('restriction@'))).toMatch(/^restriction@joint:L1:(from|to):\d+$/);
+    // Both point at the line: the support gap and the flow direction.
+    expect(openKeys.sort()).toEqual(['flow-direction@line:L1', 'support-gap@line:L1']);
     const byCode = (code: string) => opened.body.openItems.unacknowledgedCautions.find((flag: { code: string }) => flag.code === code);
-    const restriction = byCode('restriction');
+    const flow = byCode('flow-direction');
     const caution = byCode('support-gap');
     await review(circuitId, outsider).expect(404);
 
@@ -141,7 +142,7 @@ describe('reviews: submit, acknowledge, approve or return, audit trail, comparis
     await approve(circuitId, fab).expect(403);
     const blocked = await approve(circuitId, reviewer).expect(409);
     expect(blocked.body.code).toBe('review_blocked');
-    expect(blocked.body.openItems.unacknowledgedCautions.map((flag: { key: string }) => flag.key).sort()).toEqual([restriction.key, caution.key].sort());
+    expect(blocked.body.openItems.unacknowledgedCautions.map((flag: { key: string }) => flag.key).sort()).toEqual([flow.key, caution.key].sort());
 
     // Acknowledging: reviewers only, a real caution, a note of at least 3 characters, once.
     await acknowledge(circuitId, fab, { flagKey: caution.key, note: 'fine by me' }).expect(403);
@@ -153,8 +154,8 @@ describe('reviews: submit, acknowledge, approve or return, audit trail, comparis
     await acknowledge(circuitId, reviewer2, { flagKey: caution.key, note: 'seen it too' }).expect(409);
     // One caution acknowledged is not enough: every caution must be.
     const stillBlocked = await approve(circuitId, reviewer).expect(409);
-    expect(stillBlocked.body.openItems.unacknowledgedCautions.map((flag: { key: string }) => flag.key)).toEqual([restriction.key]);
-    await acknowledge(circuitId, reviewer2, { flagKey: restriction.key, note: 'Cooler flow is low; bore is acceptable' }).expect(201);
+    expect(stillBlocked.body.openItems.unacknowledgedCautions.map((flag: { key: string }) => flag.key)).toEqual([flow.key]);
+    await acknowledge(circuitId, reviewer2, { flagKey: flow.key, note: 'Cooler port is its inlet; flow checked on the vehicle' }).expect(201);
 
     const approved = await approve(circuitId, reviewer, { note: 'Good to build' }).expect(200);
     expect(approved.body).toMatchObject({
@@ -164,7 +165,7 @@ describe('reviews: submit, acknowledge, approve or return, audit trail, comparis
       openItems: { blockers: [], unacknowledgedCautions: [] },
       acknowledgements: [
         { flagKey: caution.key, by: { id: reviewer.id } },
-        { flagKey: restriction.key, by: { id: reviewer2.id } },
+        { flagKey: flow.key, by: { id: reviewer2.id } },
       ],
     });
 
