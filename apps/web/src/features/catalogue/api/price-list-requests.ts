@@ -1,6 +1,6 @@
 import type { ApiClient } from '../../../lib/api-client';
 import { postMultipart } from './post-multipart';
-import { priceCommitSchema, pricePreviewSchema, type PriceListMapping } from './price-list-schemas';
+import { priceCommitSchema, pricePreviewSchema, type CsvReadingChoice, type PriceListMapping } from './price-list-schemas';
 
 export interface PriceListRequest {
   client: ApiClient;
@@ -8,12 +8,16 @@ export interface PriceListRequest {
   supplierId: string;
   /** Left out on the first look at a file: the API then guesses one from the header row. */
   mapping?: PriceListMapping;
+  /** A CSV's encoding and separator when the user overrides what the API detected. */
+  csv?: CsvReadingChoice;
   onProgress?(fraction: number): void;
 }
 
-function fields({ file, supplierId, mapping }: PriceListRequest): Record<string, string | Blob> {
+function fields({ file, supplierId, mapping, csv }: PriceListRequest): Record<string, string | Blob> {
   const result: Record<string, string | Blob> = { supplierId, file };
   if (mapping) result.mapping = JSON.stringify(mapping);
+  if (csv?.encoding) result.encoding = csv.encoding;
+  if (csv?.delimiter) result.delimiter = csv.delimiter;
   return result;
 }
 

@@ -42,8 +42,32 @@ const mappingSchema = z
     return mapping;
   });
 
-/** `POST /api/price-lists/preview`: the header row, the (guessed or given) mapping and the dry run. */
+const readingChoiceSchema = z.object({ value: z.string(), label: z.string() });
+
+/** How the API read the file, in plain words ("Read as Windows-1252, separated by semicolons."); for a CSV also what may be chosen instead. */
+export const priceListReadingSchema = z.discriminatedUnion('format', [
+  z.looseObject({ format: z.literal('xlsx'), sheetName: z.string(), summary: z.string() }),
+  z.looseObject({
+    format: z.literal('csv'),
+    encoding: z.string(),
+    encodingDetected: z.boolean(),
+    delimiter: z.string(),
+    delimiterDetected: z.boolean(),
+    summary: z.string(),
+    choices: z.object({ encodings: z.array(readingChoiceSchema), delimiters: z.array(readingChoiceSchema) }),
+  }),
+]);
+export type PriceListReading = z.output<typeof priceListReadingSchema>;
+
+/** A CSV's text encoding and separator chosen by the user over what the API detects; empty means "detect". */
+export interface CsvReadingChoice {
+  encoding?: string;
+  delimiter?: string;
+}
+
+/** `POST /api/price-lists/preview`: how the file was read, the header row, the (guessed or given) mapping and the dry run. */
 export const pricePreviewSchema = z.looseObject({
+  readAs: priceListReadingSchema,
   headers: z.array(z.string()),
   mapping: mappingSchema.default({}),
   rows: z.array(z.unknown()).default([]),

@@ -107,10 +107,31 @@ describe('Catalogue › Parts', () => {
   });
 });
 
+const harborCsvReading = (delimiter: 'comma' | 'semicolon', detected: boolean) => ({
+  format: 'csv' as const,
+  encoding: 'windows-1252',
+  encodingDetected: true,
+  delimiter,
+  delimiterDetected: detected,
+  summary: `Read as Windows-1252, separated by ${delimiter === 'comma' ? 'commas' : 'semicolons'}${detected ? '' : ' (as chosen)'}.`,
+  choices: {
+    encodings: [
+      { value: 'utf-8', label: 'UTF-8' },
+      { value: 'windows-1252', label: 'Windows-1252 (Western European)' },
+    ],
+    delimiters: [
+      { value: 'comma', label: 'Comma (,)' },
+      { value: 'semicolon', label: 'Semicolon (;)' },
+      { value: 'tab', label: 'Tab' },
+    ],
+  },
+});
+
 describe('Catalogue › Import price list', () => {
   it('shows the row-by-row report of the dry run and keeps Import disabled', async () => {
     vi.mocked(requests.previewPriceList)
       .mockResolvedValueOnce({
+        readAs: harborCsvReading('comma', true),
         headers: ['Item', 'Desc', 'List price', 'UOM'],
         mapping: { partNumber: 'Item', description: 'Desc', price: 'List price' },
         rows: [],
@@ -118,6 +139,7 @@ describe('Catalogue › Import price list', () => {
         counts: { new: 0, updated: 0, unchanged: 0, errors: 0 },
       })
       .mockResolvedValueOnce({
+        readAs: harborCsvReading('comma', true),
         headers: ['Item', 'Desc', 'List price', 'UOM'],
         mapping: { partNumber: 'Item', description: 'Desc', price: 'List price' },
         rows: [],
@@ -153,6 +175,60 @@ describe('Catalogue › Import price list', () => {
       supplierId: 'demo-supplier-harbor',
       mapping: { partNumber: 'Item', description: 'Desc', price: 'List price' },
     });
+  });
+
+  it('says how a CSV was read and reads it again with the separator and encoding the user chooses', async () => {
+    const mapped = { partNumber: 'Item', description: 'Desc', price: 'List price' };
+    vi.mocked(requests.previewPriceList).mockReset();
+    vi.mocked(requests.commitPriceList).mockReset();
+    vi.mocked(requests.previewPriceList)
+      .mockResolvedValueOnce({
+        readAs: harborCsvReading('semicolon', true),
+        headers: ['Item,Desc,List price'],
+        mapping: {},
+        rows: [],
+        report: [],
+        counts: { new: 0, updated: 0, unchanged: 0, errors: 0 },
+      })
+      .mockResolvedValueOnce({
+        readAs: harborCsvReading('comma', false),
+        headers: ['Item', 'Desc', 'List price'],
+        mapping: mapped,
+        rows: [],
+        report: [],
+        counts: { new: 0, updated: 0, unchanged: 0, errors: 0 },
+      })
+      .mockResolvedValueOnce({
+        readAs: harborCsvReading('comma', false),
+        headers: ['Item', 'Desc', 'List price'],
+        mapping: mapped,
+        rows: [],
+        report: [],
+        counts: { new: 0, updated: 2, unchanged: 0, errors: 0 },
+      });
+    vi.mocked(requests.commitPriceList).mockResolvedValueOnce({ new: 0, updated: 2, unchanged: 0, errors: 0 });
+    renderApp({ path: '/catalogue', user: demoUsers['parts-clerk'], fetchMock: catalogueApi() });
+    const user = userEvent.setup();
+    await user.click(await screen.findByRole('tab', { name: 'Import price list' }));
+    await user.selectOptions(await screen.findByRole('combobox', { name: /Supplier/ }), 'demo-supplier-harbor');
+    await user.upload(screen.getByLabelText(/Price list file/), new File(['Item,Desc,List price\n'], 'harbor-prices.csv', { type: 'text/csv' }));
+    await user.click(screen.getByRole('button', { name: 'Read columns' }));
+
+    expect(await screen.findByText('Read as Windows-1252, separated by semicolons.')).toBeInTheDocument();
+    expect(screen.getByRole('combobox', { name: /Separator/ })).toHaveValue('semicolon');
+    expect(screen.getByRole('combobox', { name: /Text encoding/ })).toHaveValue('windows-1252');
+    await user.selectOptions(screen.getByRole('combobox', { name: /Separator/ }), 'comma');
+
+    expect(await screen.findByText('Read as Windows-1252, separated by commas (as chosen).')).toBeInTheDocument();
+    expect(vi.mocked(requests.previewPriceList).mock.calls[1][0]).toMatchObject({ csv: { delimiter: 'comma' } });
+    expect(vi.mocked(requests.previewPriceList).mock.calls[1][0].mapping).toBeUndefined();
+    expect(await screen.findByRole('combobox', { name: /Supplier part number/ })).toHaveValue('Item');
+    await user.click(screen.getByRole('button', { name: 'Check the rows (dry run)' }));
+    await user.click(await screen.findByRole('button', { name: 'Import' }));
+    await screen.findByText(/Imported: 0 new, 2 updated/);
+    // The dry run and the import read the file the same way as the preview the user saw.
+    expect(vi.mocked(requests.previewPriceList).mock.calls[2][0]).toMatchObject({ csv: { delimiter: 'comma' }, mapping: mapped });
+    expect(vi.mocked(requests.commitPriceList).mock.calls[0][0]).toMatchObject({ csv: { delimiter: 'comma' }, mapping: mapped });
   });
 
   it('refuses a file that is not .xlsx or .csv before sending it', async () => {

@@ -22,6 +22,7 @@ import {
   priceListMappingFields,
   reportBodySchema,
   requiredMappingFields,
+  type CsvReadingChoice,
   type ImportCounts,
   type ImportIssue,
   type PriceListMapping,
@@ -29,6 +30,7 @@ import {
 } from '../api/price-list-schemas';
 import type { Supplier } from '../api/supplier-schema';
 import { checkPriceListFile } from '../utils/check-price-list-file';
+import { CsvReadingFields } from './CsvReadingFields';
 import { ImportCountsSummary } from './ImportCountsSummary';
 import { ImportReportTable } from './ImportReportTable';
 
@@ -46,8 +48,8 @@ const useStyles = makeStyles({
 });
 
 /**
- * Price-list import in three steps: choose the supplier and file (the API guesses the columns),
- * map the columns and dry-run (row-by-row report, nothing written), then import all or nothing.
+ * Price-list import in three steps: choose the supplier and file (the API guesses the columns and,
+ * for a CSV, its text encoding and separator, which can be changed), map the columns and dry-run (row-by-row report, nothing written), then import all or nothing.
  */
 export function PriceListImport({ suppliers }: PriceListImportProps) {
   const styles = useStyles();
@@ -59,6 +61,7 @@ export function PriceListImport({ suppliers }: PriceListImportProps) {
   const [fileError, setFileError] = useState<string | null>(null);
   const [preview, setPreview] = useState<PricePreview | null>(null);
   const [mapping, setMapping] = useState<PriceListMapping>({});
+  const [csv, setCsv] = useState<CsvReadingChoice>({});
   const [report, setReport] = useState<ImportIssue[]>([]);
   const [result, setResult] = useState<ImportCounts | null>(null);
   const [progress, setProgress] = useState<number | null>(null);
@@ -70,6 +73,7 @@ export function PriceListImport({ suppliers }: PriceListImportProps) {
     const chosen = event.target.files?.[0] ?? null;
     setFile(chosen);
     setFileError(chosen ? checkPriceListFile(chosen) : null);
+    setCsv({});
     setStep('choose');
     setPreview(null);
     setReport([]);
@@ -90,9 +94,11 @@ export function PriceListImport({ suppliers }: PriceListImportProps) {
     }
   }
 
-  async function readFile() {
+  /** A first look (again, with `choice` when the encoding or separator was changed): columns and a guessed mapping. */
+  async function readFile(choice: CsvReadingChoice) {
     if (!file || !supplierId || checkPriceListFile(file)) return;
-    const answer = await run(() => previewPriceList({ client, file, supplierId, onProgress: setProgress }));
+    setCsv(choice);
+    const answer = await run(() => previewPriceList({ client, file, supplierId, csv: choice, onProgress: setProgress }));
     if (!answer) return;
     setPreview(answer);
     setMapping(answer.mapping);
@@ -102,7 +108,7 @@ export function PriceListImport({ suppliers }: PriceListImportProps) {
 
   async function dryRun() {
     if (!file) return;
-    const answer = await run(() => previewPriceList({ client, file, supplierId, mapping, onProgress: setProgress }));
+    const answer = await run(() => previewPriceList({ client, file, supplierId, mapping, csv, onProgress: setProgress }));
     if (!answer) return;
     setPreview(answer);
     setReport(answer.report);
@@ -111,7 +117,7 @@ export function PriceListImport({ suppliers }: PriceListImportProps) {
 
   async function commit() {
     if (!file) return;
-    const counts = await run(() => commitPriceList({ client, file, supplierId, mapping, onProgress: setProgress }));
+    const counts = await run(() => commitPriceList({ client, file, supplierId, mapping, csv, onProgress: setProgress }));
     if (!counts) return;
     setResult(counts);
     setStep('done');
@@ -125,7 +131,7 @@ export function PriceListImport({ suppliers }: PriceListImportProps) {
     <div className={styles.root}>
       <Text as="p">
         Prices and descriptions of parts already in the catalogue are updated from the supplier&apos;s list (.xlsx or .csv, at most
-        5 MB). Part numbers the catalogue does not know are reported: add new parts in the part editor, where their ratings are
+        5 MB and 20,000 rows; a CSV may be separated by commas, semicolons or tabs, in any common text encoding). Part numbers the catalogue does not know are reported: add new parts in the part editor, where their ratings are
         entered.
       </Text>
       <div className={styles.row}>
@@ -142,7 +148,7 @@ export function PriceListImport({ suppliers }: PriceListImportProps) {
         <Field label={{ children: 'Price list file', htmlFor: fileInputId }} required validationMessage={fileError}>
           <input id={fileInputId} type="file" accept=".xlsx,.csv,application/vnd.openxmlformats-officedocument.spreadsheetml.sheet,text/csv" onChange={chooseFile} disabled={busy} />
         </Field>
-        <Button icon={<ArrowUploadRegular />} disabled={!file || !supplierId || fileError !== null || busy} onClick={() => void readFile()}>
+        <Button icon={<ArrowUploadRegular />} disabled={!file || !supplierId || fileError !== null || busy} onClick={() => void readFile({})}>
           Read columns
         </Button>
       </div>
@@ -160,6 +166,7 @@ export function PriceListImport({ suppliers }: PriceListImportProps) {
 
       {preview && step !== 'done' && (
         <>
+          <CsvReadingFields readAs={preview.readAs} choice={csv} disabled={busy} onChange={(choice) => void readFile(choice)} />
           <Text weight="semibold">Columns</Text>
           <div className={styles.mapping}>
             {priceListMappingFields.map((field) => (
