@@ -22,7 +22,7 @@ import { usableScaleOf } from './evaluate-circuit.js';
  */
 export const WORK_LIMITS = {
   cornerZonePairs: 8_000_000,
-  routePoints: 24_000,
+  routePoints: 16_000,
 } as const;
 
 export interface WorkEstimate {
