@@ -70,3 +70,11 @@ export function cutLength(input: CutLengthInput): { exactCutIn: number; cutLengt
   const exactCutIn = input.overallIn - input.endStackFromIn - input.endStackToIn + input.slackIn;
   return { exactCutIn, cutLengthIn: roundCutUp(exactCutIn, input.roundingIn) };
 }
+
+/** How the cut list names the term that set a line's slack. */
+export const SLACK_RULE_WORDS: Readonly<Record<SlackRule, string>> = {
+  percent: 'shop % of the length',
+  'same-mount-minimum': 'shop minimum, one mount',
+  'cross-mount-minimum': 'shop minimum, across mounts',
+  override: 'set by hand on the line',
+};

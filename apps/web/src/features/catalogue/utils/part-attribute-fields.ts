@@ -50,6 +50,15 @@ export const attributeFields: Record<PartKind, AttributeField[]> = {
     { type: 'number', key: 'maxPressurePsi', label: 'Max working pressure', unit: 'psi' },
     { type: 'number', key: 'maxTempF', label: 'Max temperature', unit: '°F' },
     { type: 'number', key: 'minBendRadiusIn', label: 'Min bend radius', unit: 'in' },
+    {
+      type: 'choice',
+      key: 'minBendRadiusMeasuredTo',
+      label: 'Min bend radius quoted to',
+      options: [
+        { value: 'inside', label: 'Inside of the bend (hose makers’ usual way)' },
+        { value: 'centreline', label: 'Centreline of the hose' },
+      ],
+    },
     { type: 'multi-choice', key: 'fluids', label: 'Fluids it is rated for', options: fluids },
   ],
   'hose-end': [
@@ -59,6 +68,8 @@ export const attributeFields: Record<PartKind, AttributeField[]> = {
     { type: 'connection', key: 'port', label: 'Port-side connection' },
     { type: 'angle', key: 'angle', label: 'Angle' },
     { type: 'number', key: 'allowanceIn', label: 'End allowance (seal point to hose cut face)', unit: 'in' },
+    { type: 'number', key: 'rigidLengthIn', label: 'Rigid length (seal point to where the hose leaves the socket)', unit: 'in', optional: true },
+    { type: 'number', key: 'reachIn', label: 'Reach into a port (male port side)', unit: 'in', optional: true },
     { type: 'number', key: 'boreIn', label: 'Smallest bore', unit: 'in' },
     { type: 'number', key: 'maxPressurePsi', label: 'Rated pressure', unit: 'psi' },
   ],
@@ -67,6 +78,7 @@ export const attributeFields: Record<PartKind, AttributeField[]> = {
     { type: 'connection', key: 'b', label: 'Connection B' },
     { type: 'angle', key: 'angle', label: 'Angle' },
     { type: 'number', key: 'bodyLengthIn', label: 'Body length', unit: 'in' },
+    { type: 'number', key: 'reachIn', label: 'Reach into the port (side A)', unit: 'in', optional: true },
     { type: 'number', key: 'boreIn', label: 'Smallest bore', unit: 'in' },
     { type: 'text-list', key: 'features', label: 'Features', hint: 'Comma-separated, e.g. long-nose.' },
     { type: 'seal', key: 'seal', label: 'Seal needed' },
@@ -75,6 +87,7 @@ export const attributeFields: Record<PartKind, AttributeField[]> = {
   ],
   plug: [
     { type: 'connection', key: 'connection', label: 'Connection' },
+    { type: 'number', key: 'reachIn', label: 'Reach into the port', unit: 'in', optional: true },
     { type: 'seal', key: 'seal', label: 'Seal needed' },
     fittedSealCompound,
     { type: 'number', key: 'maxPressurePsi', label: 'Rated pressure', unit: 'psi', optional: true },

@@ -21,6 +21,9 @@ export const lineReportSchema = z.looseObject({
   endStackToIn: inches,
   crossesMounts: z.boolean(),
   slackIn: inches,
+  // Optional: checks stored with signed-off revisions before slack applied to every line lack them.
+  requiredSlackIn: inches.optional(),
+  slackRule: z.enum(['percent', 'same-mount-minimum', 'cross-mount-minimum', 'override']).nullable().optional(),
   exactCutIn: inches.nullable(),
   cutLengthIn: inches.nullable(),
   toleranceIn: inches.nullable(),

@@ -1,6 +1,6 @@
 import { Table, TableBody, TableCell, TableHeader, TableHeaderCell, TableRow, Text, makeStyles, tokens } from '@fluentui/react-components';
 import type { Part } from '@linesmith/catalog';
-import { formatCutLength, formatLength, type CircuitDocument, type LengthUnit } from '@linesmith/routing';
+import { formatCutLength, formatLength, SLACK_RULE_WORDS, type CircuitDocument, type LengthUnit } from '@linesmith/routing';
 import type { LineReportView } from '../api/check-schema';
 import { endStackParts, portName } from '../utils/end-stack-text';
 
@@ -35,6 +35,7 @@ export function CutListTable({ lines, document, descriptions, hoseParts, lengthU
           <TableHeaderCell>Dash</TableHeaderCell>
           <TableHeaderCell>Cut length (in)</TableHeaderCell>
           <TableHeaderCell>Cut length (mm)</TableHeaderCell>
+          <TableHeaderCell>Slack</TableHeaderCell>
           <TableHeaderCell>End stack at start</TableHeaderCell>
           <TableHeaderCell>End stack at end</TableHeaderCell>
           <TableHeaderCell>Supports</TableHeaderCell>
@@ -77,6 +78,14 @@ export function CutListTable({ lines, document, descriptions, hoseParts, lengthU
                 )}
               </TableCell>
               <TableCell className={styles.number}>{cut === null ? '—' : formatCutLength(cut, 'mm')}</TableCell>
+              <TableCell>
+                {cut === null ? '—' : len(report.slackIn)}
+                {cut !== null && report.slackRule && (
+                  <Text block size={100} className={styles.secondary}>
+                    {SLACK_RULE_WORDS[report.slackRule]}
+                  </Text>
+                )}
+              </TableCell>
               <TableCell>
                 <EndStack ids={line?.endStacks.from ?? []} descriptions={descriptions} className={styles.stack} />
               </TableCell>

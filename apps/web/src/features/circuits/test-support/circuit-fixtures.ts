@@ -77,6 +77,8 @@ export function lineReport(lineId: string, cutLengthIn: number | null, extra: Pa
     endStackToIn: 1,
     crossesMounts: true,
     slackIn: 1.5,
+    requiredSlackIn: 1.5,
+    slackRule: 'cross-mount-minimum',
     exactCutIn: cutLengthIn,
     cutLengthIn,
     toleranceIn: 0.1875,

@@ -16,6 +16,8 @@ export function fullLineReport(lineId: string, cutLengthIn: number | null): Line
     endStackToIn: 1,
     crossesMounts: true,
     slackIn: 1.5,
+    requiredSlackIn: 1.5,
+    slackRule: 'cross-mount-minimum',
     exactCutIn: cutLengthIn,
     cutLengthIn,
     toleranceIn: 0.1875,

@@ -1,7 +1,7 @@
 import { Button, Input, Label, Select, TableCell, TableRow, Text, makeStyles, tokens, useId } from '@fluentui/react-components';
 import { ArrowResetRegular } from '@fluentui/react-icons';
 import type { ShopRuleField } from '../utils/shop-rule-fields';
-import { ruleValueText } from '../utils/rule-value-text';
+import { ruleUnitSuffix, ruleValueText } from '../utils/rule-value-text';
 
 export interface ShopRuleRowProps {
   field: ShopRuleField;
@@ -68,7 +68,7 @@ export function ShopRuleRow({
               {/* Option values are the texts the form parses, so a choice saves like a typed value. */}
               {field.choices.map((choice) => ruleValueText(choice, field.unit)).map((text) => (
                 <option key={text} value={text}>
-                  {text} {field.unit === 'in' ? 'in' : '%'}
+                  {text} {ruleUnitSuffix(field.unit)}
                 </option>
               ))}
             </Select>
@@ -80,7 +80,7 @@ export function ShopRuleRow({
               value={value}
               readOnly={readOnly}
               inputMode="decimal"
-              contentAfter={<Text size={200}>{field.unit === 'in' ? 'in' : '%'}</Text>}
+              contentAfter={<Text size={200}>{ruleUnitSuffix(field.unit)}</Text>}
               aria-invalid={error ? true : undefined}
               aria-describedby={error ? `${errorId} ${helpId}` : helpId}
               onChange={(_, data) => onChange(data.value)}

@@ -140,7 +140,7 @@ export function ShopRulesForm({ record, canEdit }: ShopRulesFormProps) {
                 value={values[field.id]}
                 error={errors[field.id]}
                 defaultText={ruleValueDisplay(defaultValue, field.unit)}
-                origin={original.origins[field.rule]}
+                origin={field.origin ?? original.origins[field.rule]}
                 readOnly={!canEdit}
                 isDefault={values[field.id].trim() === defaultText}
                 onChange={(text) => setValue(field.id, text)}

@@ -39,7 +39,7 @@ describe('Admin › Shop rules', () => {
   it('shows every rule with its unit, default and the origin of the default', async () => {
     await openShopRules();
     // Defaults of DOMAIN.md §4: supports every 18 in, slack 1-1/2 in and 4 %, 6 in from exhaust (common practice).
-    expect(screen.getByLabelText('Support spacing')).toHaveValue('18');
+    expect(screen.getByLabelText('Support spacing: other sizes')).toHaveValue('18');
     expect(screen.getByLabelText('Minimum slack across mounts')).toHaveValue('1-1/2');
     expect(screen.getByLabelText('Heat clearance: exhaust')).toHaveValue('6');
     expect(screen.getByLabelText('Round cut lengths up to')).toHaveValue('1/8');
@@ -53,6 +53,37 @@ describe('Admin › Shop rules', () => {
     expect(within(ruleRow('Smallest bore')).getAllByRole('cell')[2]).toHaveTextContent('80 %');
     expect(screen.getByText(/version 3/)).toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Save' })).toBeDisabled();
+  });
+
+  it('shows the clamp spacing table by dash size, the straight stretch past the socket and the minimum free hose, each with its origin', async () => {
+    await openShopRules();
+    // FAA AC 43.13-1B Table 9-3, aluminium-alloy column (from memory): 3/16 in tube 12 in, 3/8 in 16-1/2 in, 1 in 26-1/2 in.
+    expect(screen.getByLabelText('Support spacing: -3')).toHaveValue('12');
+    expect(screen.getByLabelText('Support spacing: -6')).toHaveValue('16-1/2');
+    expect(screen.getByLabelText('Support spacing: -16')).toHaveValue('26-1/2');
+    expect(within(ruleRow('Support spacing: -6')).getAllByRole('cell')[3]).toHaveTextContent(/^FAA AC 43\.13-1B, Table 9-3, 3\/8 in tube/);
+    // Common practice: 2 hose ODs of straight hose past the socket; 2 in of free hose between the sockets.
+    expect(screen.getByLabelText('Straight hose past the socket')).toHaveValue('2');
+    expect(within(ruleRow('Straight hose past the socket')).getAllByRole('cell')[2]).toHaveTextContent('2 × hose OD');
+    expect(within(ruleRow('Straight hose past the socket')).getAllByRole('cell')[3]).toHaveTextContent(/^Common practice/);
+    expect(screen.getByLabelText('Minimum free hose')).toHaveValue('2');
+    expect(within(ruleRow('Minimum free hose')).getAllByRole('cell')[3]).toHaveTextContent(/^Common practice/);
+    expect(screen.getByLabelText('Minimum slack on one mount')).toHaveValue('1/2');
+  });
+
+  it('saves an edited row of the spacing table into the table', async () => {
+    const fetchMock = shopRulesApi().on('PUT', '/api/shop-rules', ({ body }) =>
+      jsonResponse(200, record((body as { rules: ShopRules }).rules, { version: 4 })),
+    );
+    await openShopRules(fetchMock);
+    const user = userEvent.setup();
+    const dash8 = screen.getByLabelText('Support spacing: -8');
+    await user.clear(dash8);
+    await user.type(dash8, '20 1/2');
+    await user.click(screen.getByRole('button', { name: 'Save' }));
+    expect(await screen.findByText(/Shop rules saved/)).toBeInTheDocument();
+    const saved = (fetchMock.callsTo('PUT', '/api/shop-rules')[0].body as { rules: ShopRules }).rules;
+    expect(saved.supportSpacingByDashIn).toEqual({ ...defaultShopRules.supportSpacingByDashIn, '8': 20.5 });
   });
 
   it('reads fractions of an inch and saves the rules with the version they were edited from', async () => {
@@ -90,7 +121,7 @@ describe('Admin › Shop rules', () => {
     await openShopRules(fetchMock);
     const user = userEvent.setup();
 
-    const spacing = screen.getByLabelText('Support spacing');
+    const spacing = screen.getByLabelText('Support spacing: other sizes');
     await user.clear(spacing);
     await user.type(spacing, '0');
     const sleeve = screen.getByLabelText('Fire sleeve overlap');
@@ -101,12 +132,12 @@ describe('Admin › Shop rules', () => {
     await user.type(bore, '120');
     await user.click(screen.getByRole('button', { name: 'Save' }));
 
-    expect(within(ruleRow('Support spacing')).getByText('Enter more than 0 in.')).toBeInTheDocument();
+    expect(within(ruleRow('Support spacing: other sizes')).getByText('Enter more than 0 in.')).toBeInTheDocument();
     expect(
       within(ruleRow('Fire sleeve overlap')).getByText('Enter a length in inches, for example 1 1/2, 1-1/2 or 1.5.'),
     ).toBeInTheDocument();
     expect(within(ruleRow('Smallest bore')).getByText('Enter at most 100 %.')).toBeInTheDocument();
-    expect(screen.getByLabelText('Support spacing')).toHaveAttribute('aria-invalid', 'true');
+    expect(screen.getByLabelText('Support spacing: other sizes')).toHaveAttribute('aria-invalid', 'true');
     expect(fetchMock.callsTo('PUT', '/api/shop-rules')).toHaveLength(0);
   });
 
@@ -139,12 +170,12 @@ describe('Admin › Shop rules', () => {
   it('resets a field to its default', async () => {
     await openShopRules(shopRulesApi(record({ ...defaultShopRules, supportSpacingIn: 24 })));
     const user = userEvent.setup();
-    const reset = screen.getByRole('button', { name: 'Reset Support spacing to default' });
-    expect(screen.getByLabelText('Support spacing')).toHaveValue('24');
+    const reset = screen.getByRole('button', { name: 'Reset Support spacing: other sizes to default' });
+    expect(screen.getByLabelText('Support spacing: other sizes')).toHaveValue('24');
 
     await user.click(reset);
 
-    expect(screen.getByLabelText('Support spacing')).toHaveValue('18');
+    expect(screen.getByLabelText('Support spacing: other sizes')).toHaveValue('18');
     expect(reset).toBeDisabled();
     expect(screen.getByRole('button', { name: 'Save' })).toBeEnabled();
   });
@@ -192,7 +223,7 @@ describe('Admin › Shop rules', () => {
     );
     await openShopRules(fetchMock);
     const user = userEvent.setup();
-    const spacing = screen.getByLabelText('Support spacing');
+    const spacing = screen.getByLabelText('Support spacing: other sizes');
     await user.clear(spacing);
     await user.type(spacing, '20');
     await user.click(screen.getByRole('button', { name: 'Save' }));
@@ -200,7 +231,7 @@ describe('Admin › Shop rules', () => {
 
     await user.click(screen.getByRole('button', { name: 'Use current values' }));
 
-    expect(screen.getByLabelText('Support spacing')).toHaveValue('16');
+    expect(screen.getByLabelText('Support spacing: other sizes')).toHaveValue('16');
     expect(screen.getByText(/version 4/)).toBeInTheDocument();
     expect(fetchMock.callsTo('PUT', '/api/shop-rules')).toHaveLength(1);
   });

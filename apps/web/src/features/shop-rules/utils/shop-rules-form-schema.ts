@@ -17,16 +17,16 @@ function parseFieldText(field: ShopRuleField, text: string): number | null {
       return null;
     }
   }
-  const body = text.trim().replace(/\s*%$/, '').replace(',', '.');
+  const body = text.trim().replace(/\s*(?:%|×\s*(?:hose\s*)?OD|x\s*OD)$/i, '').replace(',', '.');
   if (!/^-?(?:\d+(?:\.\d*)?|\.\d+)$/.test(body)) return null;
   const percent = Number(body);
   return field.unit === 'ratio' ? percent / 100 : percent;
 }
 
 function notANumberMessage(field: ShopRuleField): string {
-  return field.unit === 'in'
-    ? 'Enter a length in inches, for example 1 1/2, 1-1/2 or 1.5.'
-    : 'Enter a percentage as a number, for example 4.';
+  if (field.unit === 'in') return 'Enter a length in inches, for example 1 1/2, 1-1/2 or 1.5.';
+  if (field.unit === 'od') return 'Enter a number of hose outside diameters, for example 2.';
+  return 'Enter a percentage as a number, for example 4.';
 }
 
 /** The limits are the routing library's (`shopRulesSchema`); only the words are the form's. */

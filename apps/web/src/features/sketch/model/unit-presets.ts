@@ -46,7 +46,7 @@ export const unitPresets: Readonly<Record<UnitKind, UnitPreset>> = {
     height: 80,
     mountGroup: 'chassis',
     ports: [
-      { label: 'Inlet', role: 'feed', connection: female('invflare45', '3/8'), dx: -70, dy: -25 },
+      { label: 'Inlet', role: 'in', connection: female('invflare45', '3/8'), dx: -70, dy: -25 },
       { label: 'Outlet', role: 'out', connection: female('invflare45', '3/8'), dx: -70, dy: 25 },
     ],
   },
@@ -68,7 +68,7 @@ export const unitPresets: Readonly<Record<UnitKind, UnitPreset>> = {
     height: 50,
     mountGroup: 'chassis',
     ports: [
-      { label: 'Inlet', role: 'feed', connection: female('orb', '-8'), dx: -40, dy: 0 },
+      { label: 'Inlet', role: 'in', connection: female('orb', '-8'), dx: -40, dy: 0 },
       { label: 'Outlet', role: 'out', connection: female('orb', '-6'), dx: 40, dy: 0 },
     ],
   },
@@ -79,7 +79,7 @@ export const unitPresets: Readonly<Record<UnitKind, UnitPreset>> = {
     height: 60,
     mountGroup: 'chassis',
     ports: [
-      { label: 'In', role: 'feed', connection: female('orb', '-8'), dx: -30, dy: 0 },
+      { label: 'In', role: 'in', connection: female('orb', '-8'), dx: -30, dy: 0 },
       { label: 'Out', role: 'out', connection: female('orb', '-8'), dx: 30, dy: 0 },
     ],
   },
@@ -101,7 +101,7 @@ export const unitPresets: Readonly<Record<UnitKind, UnitPreset>> = {
     height: 30,
     mountGroup: 'powertrain',
     ports: [
-      { label: 'Feed', role: 'feed', connection: female('orb', '-6'), dx: -100, dy: 0 },
+      { label: 'In', role: 'in', connection: female('orb', '-6'), dx: -100, dy: 0 },
       { label: 'Out', role: 'out', connection: female('orb', '-6'), dx: 100, dy: 0 },
     ],
   },
@@ -112,9 +112,9 @@ export const unitPresets: Readonly<Record<UnitKind, UnitPreset>> = {
     height: 70,
     mountGroup: 'chassis',
     ports: [
-      { label: 'In', role: 'feed', connection: female('orb', '-6'), dx: -35, dy: 0 },
+      { label: 'In', role: 'in', connection: female('orb', '-6'), dx: -35, dy: 0 },
       { label: 'Out', role: 'out', connection: female('orb', '-6'), dx: 35, dy: 0 },
-      { label: 'Return', role: 'return', connection: female('orb', '-6'), dx: 0, dy: 35 },
+      { label: 'Return to tank', role: 'out', connection: female('orb', '-6'), dx: 0, dy: 35 },
     ],
   },
   'bulkhead-plate': {
@@ -136,7 +136,7 @@ export const unitPresets: Readonly<Record<UnitKind, UnitPreset>> = {
     mountGroup: 'chassis',
     valveKind: 'thermostatic-bypass',
     ports: [
-      { label: 'In', role: 'feed', connection: female('orb', '-6'), dx: -30, dy: 0 },
+      { label: 'In', role: 'in', connection: female('orb', '-6'), dx: -30, dy: 0 },
       { label: 'Out', role: 'out', connection: female('orb', '-6'), dx: 30, dy: 0 },
     ],
   },

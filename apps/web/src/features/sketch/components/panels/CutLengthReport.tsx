@@ -1,5 +1,5 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
-import { formatCutLength, formatLength, inToMm, type LengthUnit, type LineReport } from '@linesmith/routing';
+import { formatCutLength, formatLength, inToMm, SLACK_RULE_WORDS, type LengthUnit, type LineReport } from '@linesmith/routing';
 
 const useStyles = makeStyles({
   table: { borderCollapse: 'collapse', width: '100%', fontSize: tokens.fontSizeBase200 },
@@ -24,7 +24,10 @@ export function CutLengthReport({ report, unit }: CutLengthReportProps) {
     ['Worked from', report.basis === 'measured' ? 'measured length' : report.basis === 'drawn' ? 'drawn centreline' : 'nothing yet'],
     ['− End stack at from-port', len(report.endStackFromIn)],
     ['− End stack at to-port', len(report.endStackToIn)],
-    [`+ Slack${report.crossesMounts ? ' (crosses mount groups)' : ''}`, len(report.slackIn)],
+    [
+      `+ Slack${report.slackRule ? ` (${SLACK_RULE_WORDS[report.slackRule]})` : ''}${report.crossesMounts ? ', crosses mount groups' : ''}`,
+      len(report.slackIn),
+    ],
     // The exact cut unrounded (whole mm would hide up to half a millimetre); the next row is what to cut.
     ['= Exact cut', report.exactCutIn === null ? '—' : unit === 'mm' ? `${inToMm(report.exactCutIn).toFixed(1)} mm` : `${report.exactCutIn.toFixed(3)} in`],
     ['Cut length (rounded up)', report.cutLengthIn === null ? '—' : formatCutLength(report.cutLengthIn, unit), true],

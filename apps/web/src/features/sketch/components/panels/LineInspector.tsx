@@ -1,5 +1,5 @@
 import { Button, Field, makeStyles, Select, Text, tokens } from '@fluentui/react-components';
-import { formatLength, type CircuitDocument, type CircuitLine } from '@linesmith/routing';
+import { bendRadiusCheck, formatLength, supportSpacingFor, type CircuitDocument, type CircuitLine } from '@linesmith/routing';
 import { useMemo, useState } from 'react';
 import { useEditor } from '../../hooks/editor-context';
 import { deleteLine } from '../../model/commands/delete-line';
@@ -50,6 +50,7 @@ export function LineInspector({ doc, line, selectedCorner }: LineInspectorProps)
   const to = endOf(line.to);
   const len = (v: number) => formatLength(v, lengthUnit);
   const basisIn = report?.basis === 'measured' ? report.measuredLengthIn : report?.centrelineIn ?? null;
+  const spacingIn = supportSpacingFor(hose?.attributes.dash, shopRules);
 
   return (
     <div className={styles.stack}>
@@ -103,6 +104,11 @@ export function LineInspector({ doc, line, selectedCorner }: LineInspectorProps)
             {line.points.map((p, index) => (
               <li key={index} className={styles.row} style={{ fontWeight: index === selectedCorner ? 600 : undefined }}>
                 <span>Corner {index + 1}</span>
+                {hose && p.bendRadiusIn > 0 && (
+                  <span title="Inside radius = centreline radius − half the hose OD">
+                    inside {Number(bendRadiusCheck(p.bendRadiusIn, hose).insideIn.toFixed(3))} in
+                  </span>
+                )}
                 <CommitInput
                   size="small"
                   aria-label={`Bend radius of corner ${index + 1}`}
@@ -121,12 +127,19 @@ export function LineInspector({ doc, line, selectedCorner }: LineInspectorProps)
               </li>
             ))}
           </ol>
-          {hose && <Text size={200}>This hose bends no tighter than {len(hose.attributes.minBendRadiusIn)} radius.</Text>}
+          {hose && (
+            <Text size={200}>
+              This hose bends no tighter than {hose.attributes.minBendRadiusIn} in radius, quoted by its maker to the{' '}
+              {(hose.attributes.minBendRadiusMeasuredTo ?? 'inside') === 'inside' ? 'inside of the bend' : 'centreline'} (set per hose in the
+              catalogue). Corner radii here are centreline radii.
+            </Text>
+          )}
         </section>
       )}
       <section aria-label="Supports">
         <Text weight="semibold" size={200}>
-          Supports ({line.supports.length}) — shop spacing {len(shopRules.supportSpacingIn)}
+          Supports ({line.supports.length}) — shop spacing {len(spacingIn)}
+          {hose && shopRules.supportSpacingByDashIn[String(hose.attributes.dash)] !== undefined ? ` for -${hose.attributes.dash}` : ''}
         </Text>
         <ul className={styles.list}>
           {line.supports.map((s) => (
@@ -141,7 +154,7 @@ export function LineInspector({ doc, line, selectedCorner }: LineInspectorProps)
         <Button
           size="small"
           disabled={basisIn === null}
-          onClick={() => basisIn !== null && store.run(proposeSupports, { lineId, lengthIn: basisIn, spacingIn: shopRules.supportSpacingIn })}
+          onClick={() => basisIn !== null && store.run(proposeSupports, { lineId, lengthIn: basisIn, spacingIn })}
         >
           Propose supports
         </Button>

@@ -6,12 +6,23 @@ import { deletePort } from '../../model/commands/delete-port';
 import { setConnectionSpec } from '../../model/commands/set-connection-spec';
 import { updatePort } from '../../model/commands/update-port';
 import { CommitInput } from './CommitInput';
+import { lengthFieldText, parseLength } from './length-input';
 
 export interface PortEditorProps {
   unitId: string;
   port: CircuitPort;
   highlighted: boolean;
 }
+
+/** Which way fluid goes through each role, as the flow-direction check reads it. */
+const ROLE_WORDS: Readonly<Record<PortRole, string>> = {
+  out: 'out (outlet)',
+  in: 'in (inlet)',
+  return: 'return (fluid comes back in)',
+  feed: 'feed (supplies another unit)',
+  drain: 'drain (outlet)',
+  vent: 'vent (breathes air)',
+};
 
 const useStyles = makeStyles({
   box: { border: `1px solid ${tokens.colorNeutralStroke2}`, borderRadius: tokens.borderRadiusMedium, padding: tokens.spacingVerticalXS, display: 'grid', gap: tokens.spacingVerticalXXS },
@@ -75,7 +86,7 @@ export function PortEditor({ unitId, port, highlighted }: PortEditorProps) {
         <Select size="small" value={port.role} onChange={(_, d) => store.run(updatePort, { ...ref, changes: { role: d.value as PortRole } })}>
           {portRoleSchema.options.map((r) => (
             <option key={r} value={r}>
-              {r}
+              {ROLE_WORDS[r]}
             </option>
           ))}
         </Select>
@@ -114,6 +125,29 @@ export function PortEditor({ unitId, port, highlighted }: PortEditorProps) {
             }
           />
         </Field>
+      </div>
+      <div className={styles.row}>
+        {(
+          [
+            ['threadDepthIn', 'Thread depth (in)', 'Usable full thread from the face; a longer reach bottoms.'],
+            ['passageDepthIn', 'Passage at (in)', 'Depth of an internal passage behind the port; a fitting reaching it blocks it.'],
+            ['minReachIn', 'Least reach (in)', 'Reach the port needs, e.g. a long nose into the lubrication passage.'],
+          ] as const
+        ).map(([key, label, hint]) => (
+          <Field key={key} label={label} size="small" hint={hint}>
+            <CommitInput
+              size="small"
+              value={lengthFieldText(port[key], 'in')}
+              onCommit={(text) => {
+                try {
+                  store.run(updatePort, { ...ref, changes: { [key]: text.trim() ? parseLength(text, 'in') : null } });
+                } catch (e) {
+                  return e instanceof Error ? e.message : String(e);
+                }
+              }}
+            />
+          </Field>
+        ))}
       </div>
       <Button size="small" appearance="subtle" onClick={() => store.run(deletePort, ref)}>
         Delete port {name}

@@ -1,4 +1,4 @@
-import { Button, Field, makeStyles, Select, Text, tokens } from '@fluentui/react-components';
+import { Button, Checkbox, Field, makeStyles, Select, Text, tokens } from '@fluentui/react-components';
 import { heatZoneKindSchema, type HeatZone, type HeatZoneKind } from '@linesmith/routing';
 import { useState } from 'react';
 import { useEditor } from '../../hooks/editor-context';
@@ -49,6 +49,16 @@ export function ZoneInspector({ zone }: { zone: HeatZone }) {
           }}
         />
       </Field>
+      <Checkbox
+        label="Shielded: a heat shield stands between this hot part and the lines"
+        checked={!!zone.shielded}
+        onChange={(_, d) => store.run(updateHeatZone, { zoneId, changes: { shielded: d.checked === true } })}
+      />
+      <Text size={200}>
+        {zone.shielded
+          ? 'A line touching this zone is a caution the reviewer must acknowledge; the stretch within the clearance still needs a fire sleeve.'
+          : 'A line touching this zone is a blocker. Never route fuel or oil across exhaust without shielding.'}
+      </Text>
       <Button size="small" appearance="subtle" onClick={() => store.run(deleteHeatZone, { zoneId })}>
         Delete heat zone
       </Button>

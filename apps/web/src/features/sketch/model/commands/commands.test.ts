@@ -98,6 +98,15 @@ describe('sketch commands (each checked with its undo and redo)', () => {
     expect(gone.lines).toEqual([]);
   });
 
+  it('updatePort sets and clears a port’s thread depth, passage depth and least reach (inches, more than 0)', () => {
+    const deep = runAndUndo(coolerSketch(), updatePort, { unitId: 'trans', portId: 'ret', changes: { threadDepthIn: 1.2, passageDepthIn: 1.5, minReachIn: 0.9 } });
+    expect(deep.units[0].ports[1]).toMatchObject({ threadDepthIn: 1.2, passageDepthIn: 1.5, minReachIn: 0.9 });
+    expect(circuitDocumentSchema.safeParse(deep).success).toBe(true);
+    const cleared = runAndUndo(deep, updatePort, { unitId: 'trans', portId: 'ret', changes: { passageDepthIn: null } });
+    expect(cleared.units[0].ports[1].passageDepthIn).toBeUndefined();
+    expect(() => updatePort(coolerSketch(), { unitId: 'trans', portId: 'ret', changes: { minReachIn: 0 } })).toThrow(RangeError);
+  });
+
   it('addLine joins two free ports through the corners and refuses a taken port', () => {
     const doc = runAndUndo(coolerSketch(), addLine, {
       from: { unitId: 'trans', portId: 'out' },
@@ -160,6 +169,9 @@ describe('sketch commands (each checked with its undo and redo)', () => {
     const edited = runAndUndo(withZone(), updateHeatZone, { zoneId: 'z1', changes: { kind: 'turbo', clearanceIn: 8, label: 'Turbo' } });
     expect(edited.heatZones[0]).toMatchObject({ kind: 'turbo', clearanceIn: 8, label: 'Turbo' });
     expect(runAndUndo(edited, updateHeatZone, { zoneId: 'z1', changes: { clearanceIn: null } }).heatZones[0].clearanceIn).toBeUndefined();
+    const shielded = runAndUndo(edited, updateHeatZone, { zoneId: 'z1', changes: { shielded: true } });
+    expect(shielded.heatZones[0].shielded).toBe(true);
+    expect(runAndUndo(shielded, updateHeatZone, { zoneId: 'z1', changes: { shielded: false } }).heatZones[0].shielded).toBeUndefined();
     expect(runAndUndo(withZone(), deleteHeatZone, { zoneId: 'z1' }).heatZones).toEqual([]);
   });
 

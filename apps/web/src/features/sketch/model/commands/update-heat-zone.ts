@@ -8,6 +8,8 @@ export interface UpdateHeatZoneArgs {
     kind?: HeatZoneKind;
     /** Inches; null goes back to the shop's clearance for the kind. */
     clearanceIn?: number | null;
+    /** A heat shield stands between the hot part and the lines (contact becomes a caution). */
+    shielded?: boolean;
     polygon?: Array<{ x: number; y: number }>;
   };
 }
@@ -21,6 +23,8 @@ export const updateHeatZone = command<UpdateHeatZoneArgs>('Edit heat zone', (dra
     if (!(changes.clearanceIn >= 0)) throw new RangeError('A clearance is 0 or more inches');
     zone.clearanceIn = changes.clearanceIn;
   }
+  if (changes.shielded === true) zone.shielded = true;
+  else if (changes.shielded === false) delete zone.shielded;
   if (changes.polygon) {
     if (changes.polygon.length < 3) throw new RangeError('A heat zone needs at least 3 points');
     zone.polygon = changes.polygon.map((p) => ({ x: p.x, y: p.y }));
