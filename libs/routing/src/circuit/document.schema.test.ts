@@ -94,6 +94,24 @@ describe('migrateCircuitDocument', () => {
     expect(migrateCircuitDocument(coolerCircuitInput()).lines).toHaveLength(2);
   });
 
+  it('reads a document saved before shields, port depths and the in role: the new fields are optional', () => {
+    // As saved then: the cooler inlet marked feed, no shielded flag, no port depths.
+    const old = coolerCircuitInput();
+    old.units[1].ports[0].role = 'feed';
+    old.heatZones = [{ id: 'hz', kind: 'exhaust', polygon: [{ x: 0, y: 0 }, { x: 10, y: 0 }, { x: 0, y: 10 }] }];
+    const doc = migrateCircuitDocument(JSON.parse(JSON.stringify(old)));
+    expect(doc.heatZones[0].shielded).toBeUndefined();
+    expect(doc.units[0].ports[1].threadDepthIn).toBeUndefined();
+    // And the new fields are validated: depths are positive inches.
+    const bad = coolerCircuitInput();
+    bad.units[0].ports[1].minReachIn = -1;
+    expect(circuitDocumentSchema.safeParse(bad).success).toBe(false);
+    const shielded = coolerCircuitInput();
+    shielded.heatZones = [{ ...old.heatZones[0], shielded: true }];
+    shielded.units[0].ports[1].role = 'in';
+    expect(circuitDocumentSchema.parse(shielded).heatZones[0].shielded).toBe(true);
+  });
+
   it('refuses an unknown version with a clear error', () => {
     expect(() => migrateCircuitDocument({ ...coolerCircuitInput(), schema: 'linesmith.circuit/9' })).toThrow(CircuitVersionError);
     expect(() => migrateCircuitDocument({ ...coolerCircuitInput(), schema: 'linesmith.circuit/9' })).toThrow(/linesmith\.circuit\/9.*cannot read/);
