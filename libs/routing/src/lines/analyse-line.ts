@@ -6,7 +6,7 @@ import { fillPackedRoutePath, packCentreline, type PackedCentreline } from '../g
 import { subtractIntervals, totalLength, type Interval } from '../geometry/intervals.js';
 import type { RoutePath } from '../geometry/route-path.js';
 import { supportSpacingFor, type ShopRules } from '../rules/shop-rules.js';
-import { cutLength, cutLengthTolerance, requiredSlack } from './cut-length.js';
+import { cutLength, cutLengthTolerance, requiredSlack, type SlackRule } from './cut-length.js';
 import { resolveEndStack, type Mater, type ResolvedStack } from './end-stack.js';
 import { heatExposure, type HeatExposure, type prepareZones } from './heat.js';
 import type { LineReport, PlacedSleeve, SleeveProblem } from './line-report.js';
@@ -104,8 +104,12 @@ export function analyseLine(line: CircuitLine, env: LineEnvironment): LineAnalys
   const basis = measuredLengthIn !== null ? 'measured' : centrelineIn !== null ? 'drawn' : null;
 
   const crossesMounts = !!from && !!to && from.unit.mountGroup !== to.unit.mountGroup;
-  const requiredSlackIn = crossesMounts && basisIn !== null ? requiredSlack(basisIn, rules) : 0;
-  const slackIn = line.slackOverrideIn ?? requiredSlackIn;
+  // Every line gets slack (hose shortens under pressure on any mount): max(minimum for the mount case, % × length).
+  const need = basisIn === null ? null : requiredSlack(basisIn, rules, crossesMounts);
+  const requiredSlackIn = need?.requiredIn ?? 0;
+  const override = line.slackOverrideIn ?? null;
+  const slackIn = override ?? requiredSlackIn;
+  const slackRule: SlackRule | null = override !== null ? 'override' : (need?.rule ?? null);
 
   let exactCutIn: number | null = null;
   let cutLengthIn: number | null = null;
@@ -157,6 +161,8 @@ export function analyseLine(line: CircuitLine, env: LineEnvironment): LineAnalys
     endStackToIn: stacks.to.lengthIn,
     crossesMounts,
     slackIn,
+    requiredSlackIn,
+    slackRule,
     exactCutIn,
     cutLengthIn,
     toleranceIn: cutLengthIn === null ? null : cutLengthTolerance(cutLengthIn),
