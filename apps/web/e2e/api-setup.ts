@@ -143,9 +143,11 @@ export async function sketchTransmissionCoolerLine(session: ApiSession, circuitI
         from: { unitId: 'transmission', portId: 'cooler-return' },
         to: { unitId: 'cooler', portId: 'out' },
         hosePartId: hose.id,
+        // Each corner far enough from its port that the bend starts past the rigid end stack
+        // (adapters + hose-end socket, about 3-3/4 in and 3-1/8 in here).
         points: [
-          { x: 480, y: 444, bendRadiusIn: 3 },
-          { x: 480, y: 180, bendRadiusIn: 3 },
+          { x: 540, y: 444, bendRadiusIn: 3 },
+          { x: 450, y: 180, bendRadiusIn: 3 },
         ],
         endStacks: {
           from: endStack(port('transmission', 'cooler-return'), hose, parts),
